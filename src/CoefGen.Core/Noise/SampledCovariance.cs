@@ -1,0 +1,109 @@
+namespace CoefGen.Core.Noise;
+
+/// <summary>
+/// The noise covariance at the weighted sample instants, stored as one value per lag (the noise is
+/// stationary and the samples sit on the ADC clock grid): R_ij = Lag[|n_i - n_j|] + delta_ij * Digital,
+/// with n_i the cycle index of sample i. Each analog component is kept separately for the budget.
+/// Analog lag values may have a lag-independent constant removed (1/f): any weights with sum h = 0
+/// see exactly the same variance.
+/// </summary>
+public sealed class SampledCovariance
+{
+    private readonly int[] _index;
+
+    public SampledCovariance(IReadOnlyList<int> sampleIndex, IReadOnlyList<CovarianceComponent> components, double digitalVarianceV2)
+    {
+        ArgumentNullException.ThrowIfNull(sampleIndex);
+        ArgumentNullException.ThrowIfNull(components);
+        _index = [.. sampleIndex];
+        Components = components;
+        DigitalVarianceV2 = digitalVarianceV2;
+        var maxLag = _index.Length == 0 ? 0 : _index[^1] - _index[0];
+        TotalLag = new double[maxLag + 1];
+        foreach (var c in components)
+        {
+            if (c.Lag.Count < maxLag + 1)
+            {
+                throw new ArgumentException($"component '{c.Name}' has {c.Lag.Count} lags, need {maxLag + 1}");
+            }
+
+            for (var k = 0; k <= maxLag; k++)
+            {
+                TotalLag[k] += c.Lag[k];
+            }
+        }
+    }
+
+    public IReadOnlyList<CovarianceComponent> Components { get; }
+
+    /// <summary>White digital variance per sample in V^2 (quantisation + ADC noise).</summary>
+    public double DigitalVarianceV2 { get; }
+
+    /// <summary>Sum of the analog components' lag values.</summary>
+    public double[] TotalLag { get; }
+
+    public int Count => _index.Length;
+
+    public IReadOnlyList<int> SampleIndex => _index;
+
+    /// <summary>Entry R_ij including the digital diagonal.</summary>
+    public double At(int i, int j) => TotalLag[Math.Abs(_index[i] - _index[j])] + (i == j ? DigitalVarianceV2 : 0.0);
+
+    /// <summary>The dense matrix (reference path; O(N^2) memory).</summary>
+    public double[,] ToDense()
+    {
+        var n = Count;
+        var m = new double[n, n];
+        for (var i = 0; i < n; i++)
+        {
+            for (var j = 0; j < n; j++)
+            {
+                m[i, j] = At(i, j);
+            }
+        }
+
+        return m;
+    }
+
+    /// <summary>h^T R h with the digital diagonal.</summary>
+    public double QuadraticForm(IReadOnlyList<double> h) => QuadraticForm(h, TotalLag) + DigitalPart(h);
+
+    /// <summary>h^T C_c h for one analog component.</summary>
+    public double ComponentQuadraticForm(IReadOnlyList<double> h, int component) => QuadraticForm(h, Components[component].Lag);
+
+    /// <summary>Digital part sigma_d^2 * sum h^2.</summary>
+    public double DigitalPart(IReadOnlyList<double> h)
+    {
+        ArgumentNullException.ThrowIfNull(h);
+        var s = 0.0;
+        for (var i = 0; i < h.Count; i++)
+        {
+            s += h[i] * h[i];
+        }
+
+        return s * DigitalVarianceV2;
+    }
+
+    private double QuadraticForm(IReadOnlyList<double> h, IReadOnlyList<double> lag)
+    {
+        ArgumentNullException.ThrowIfNull(h);
+        if (h.Count != Count)
+        {
+            throw new ArgumentException($"weight vector has {h.Count} entries, covariance {Count}");
+        }
+
+        var total = 0.0;
+        for (var i = 0; i < Count; i++)
+        {
+            var row = lag[0] * h[i];
+            for (var j = i + 1; j < Count; j++)
+            {
+                row += 2 * lag[_index[j] - _index[i]] * h[j];
+            }
+
+            total += h[i] * row;
+        }
+
+        return total;
+    }
+}

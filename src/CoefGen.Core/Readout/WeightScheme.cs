@@ -1,0 +1,14 @@
+namespace CoefGen.Core.Readout;
+
+/// <summary>How the real-valued weights are derived.</summary>
+public enum WeightScheme
+{
+    /// <summary>Equal weights in each window (the digital differential averager).</summary>
+    Boxcar,
+
+    /// <summary>A chosen window shape in each window.</summary>
+    Weighted,
+
+    /// <summary>Minimum-variance weights for the described noise.</summary>
+    Optimal,
+}
