@@ -1,6 +1,8 @@
+using System.CommandLine;
+
 namespace CoefGen.Cli;
 
 internal static class Program
 {
-    public static int Main(string[] args) => args.Length >= 0 ? 0 : 1;
+    public static int Main(string[] args) => CliApp.Run(args, Console.Out, Console.Error);
 }

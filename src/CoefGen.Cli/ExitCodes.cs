@@ -1,0 +1,14 @@
+namespace CoefGen.Cli;
+
+/// <summary>Process exit codes of every command.</summary>
+internal static class ExitCodes
+{
+    /// <summary>Success.</summary>
+    public const int Ok = 0;
+
+    /// <summary>check/verify found a difference (or a command-line parse error, as System.CommandLine reports it).</summary>
+    public const int Difference = 1;
+
+    /// <summary>Bad input: readout file, target, template, vector or dump problems.</summary>
+    public const int BadInput = 2;
+}
