@@ -10,6 +10,9 @@ internal static class CliApp
         new("coefgen: derive, predict, quantise, prove and emit correlated-sampling weights for image-sensor readout.\n" +
             "Start with `coefgen design <readout.toml>`; every command explains its options with --help.")
         {
+            DesignCommand.Create(output, error),
+            EmitCommand.Create(output, error),
+            CheckCommand.Create(output, error),
             TargetsCommand.Create(output, error),
         };
 

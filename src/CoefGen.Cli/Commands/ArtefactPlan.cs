@@ -1,0 +1,79 @@
+using CoefGen.Cli.Io;
+using CoefGen.Core.Diagnostics;
+using CoefGen.Core.Emit;
+using CoefGen.Core.Pipeline;
+
+namespace CoefGen.Cli.Commands;
+
+/// <summary>Turns a design into rendered artefacts: the readout's [[emit]] entries, or ad-hoc --format / --template ones.</summary>
+internal static class ArtefactPlan
+{
+    public static Provenance ProvenanceOf(DesignResult r) => new(
+        ToolInfo.Name,
+        ToolInfo.Version,
+        Path.GetFileName(r.Description.SourcePath),
+        r.Description.ContentSha256,
+        r.ChosenPrediction.Label,
+        r.ChosenPrediction.SigmaElectrons,
+        r.ChosenPrediction.SigmaAdu);
+
+    /// <summary>Entries to render: explicit formats and template override the file's [[emit]] list.</summary>
+    public static IReadOnlyList<(string Template, string OutputPath)> Entries(DesignResult r, IReadOnlyList<string> formats, string? template, string? templateOut)
+    {
+        var prefix = TemplateModel.Create(r.Integer, ProvenanceOf(r)).Prefix;
+        var list = new List<(string, string)>();
+        foreach (var f in formats)
+        {
+            var name = BuiltinTemplates.TryGet(f, out var b) ? b.DefaultOutputName(prefix) : f;
+            list.Add((f, name));
+        }
+
+        if (template is not null)
+        {
+            list.Add((Path.GetFullPath(template), templateOut ?? Path.GetFileNameWithoutExtension(template)));
+        }
+
+        if (list.Count == 0)
+        {
+            list.AddRange(r.Description.Emit.Select(e => (e.Template, e.Path)));
+        }
+
+        return list;
+    }
+
+    /// <summary>Renders everything in memory; on failure prints the diagnostics and returns null.</summary>
+    public static IReadOnlyList<RenderedArtefact>? Render(DesignResult r, IReadOnlyList<(string Template, string OutputPath)> entries, TextWriter error)
+    {
+        if (entries.Count == 0)
+        {
+            DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG3101", SourceLocation.FileOnly(r.Description.SourcePath),
+                "nothing to emit: add [[emit]] entries (template, path) to the readout file or pass --format c-header|vhdl-package|sv-package|verilog-include")]);
+            return null;
+        }
+
+        foreach (var (template, _) in entries)
+        {
+            if (!BuiltinTemplates.TryGet(template, out _) && !Path.IsPathRooted(template) && !template.Contains('.', StringComparison.Ordinal))
+            {
+                var known = string.Join(", ", BuiltinTemplates.All.Select(t => t.Name));
+                DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG3102", r.Description.LocationOf("emit"),
+                    $"'{template}' is neither a built-in template ({known}) nor a template file path")]);
+                return null;
+            }
+        }
+
+        var model = TemplateModel.Create(r.Integer, ProvenanceOf(r));
+        var userBase = Path.GetDirectoryName(Path.GetFullPath(r.Description.SourcePath)) ?? ".";
+        var result = ArtefactRenderer.RenderAll(model, entries, ResourceLocator.TemplatesDir, userBase);
+        if (!result.Succeeded)
+        {
+            DiagnosticPrinter.PrintFailure(error, result.Diagnostics);
+            return null;
+        }
+
+        DiagnosticPrinter.Print(error, result.Diagnostics);
+        return result.Artefacts;
+    }
+
+    public static string DefaultOutDir(string readoutPath) => Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";
+}

@@ -1,0 +1,80 @@
+using System.Globalization;
+using System.Text.Json;
+using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Pipeline;
+
+namespace CoefGen.Cli.Output;
+
+/// <summary>The "fixed_point" object of the design JSON: settings, integer coefficients, proof.</summary>
+internal static class FixedPointJson
+{
+    public static void Write(Utf8JsonWriter w, DesignResult r)
+    {
+        var i = r.Integer;
+        w.WriteStartObject("fixed_point");
+        w.WriteString("target", r.FixedPointSettings.TargetName);
+        w.WriteString("scheme", DesignText.SchemeWord(r.Chosen.Scheme));
+        w.WriteNumber("coef_bits", i.CoefBits);
+        w.WriteNumber("sample_bits", i.SampleBits);
+        w.WriteNumber("product_bits", i.ProductBits);
+        w.WriteNumber("acc_bits", i.AccBits);
+        w.WriteString("accumulator", i.Accumulator == AccumulatorMode.Wrap ? "wrap" : "saturate");
+        w.WriteNumber("output_bits", i.OutputBits);
+        w.WriteNumber("output_frac_bits", i.OutputFracBits);
+        w.WriteString("rounding", DesignText.RoundingWord(i.Rounding));
+        w.WriteString("normalize", i.Normalize == NormalizeMode.Shift ? "shift" : "exact");
+        w.WriteNumber("p", i.P);
+        w.WriteNumber("shift", i.Shift);
+        w.WriteNumber("post_multiplier", i.PostMultiplier);
+        w.WriteNumber("post_multiplier_bits", i.PostMultiplierBits);
+        w.WriteString("rounding_constant", i.RoundingConstant.ToString(CultureInfo.InvariantCulture));
+        w.WriteNumber("gain_error_ppm", i.GainErrorPpm);
+        w.WriteNumber("noise_penalty_percent", i.NoisePenaltyPercent);
+        w.WriteNumber("predicted_noise_output_lsb", i.PredictedNoiseOutputLsb);
+        w.WriteStartArray("coefficients");
+        foreach (var c in i.Coefficients)
+        {
+            w.WriteNumberValue(c);
+        }
+
+        w.WriteEndArray();
+        w.WriteStartObject("proof");
+        w.WriteBoolean("safe", i.Proof.Safe);
+        w.WriteStartArray("checks");
+        foreach (var c in i.Proof.Checks)
+        {
+            w.WriteStartObject();
+            w.WriteString("name", c.Name);
+            w.WriteString("min", c.MinValue.ToString(CultureInfo.InvariantCulture));
+            w.WriteString("max", c.MaxValue.ToString(CultureInfo.InvariantCulture));
+            w.WriteNumber("required_bits", c.RequiredBits);
+            w.WriteNumber("available_bits", c.AvailableBits);
+            w.WriteNumber("margin_bits", c.MarginBits);
+            w.WriteBoolean("fits", c.Fits);
+            w.WriteBoolean("decides_safety", c.Required);
+            if (c.WorstCaseCodes is { } codes)
+            {
+                w.WriteStartArray("worst_case_codes");
+                foreach (var code in codes)
+                {
+                    w.WriteNumberValue(code);
+                }
+
+                w.WriteEndArray();
+            }
+
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteStartArray("advice");
+        foreach (var a in i.Proof.Advice)
+        {
+            w.WriteStringValue(a);
+        }
+
+        w.WriteEndArray();
+        w.WriteEndObject();
+        w.WriteEndObject();
+    }
+}

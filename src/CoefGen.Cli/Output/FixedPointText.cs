@@ -1,0 +1,37 @@
+using System.Text;
+using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Pipeline;
+
+namespace CoefGen.Cli.Output;
+
+/// <summary>The integer design and its width proof, as a table with margins.</summary>
+internal static class FixedPointText
+{
+    public static void Append(StringBuilder sb, DesignResult r)
+    {
+        var i = r.Integer;
+        var s = r.FixedPointSettings;
+        sb.Append($"Fixed point ({r.ChosenPrediction.Label} on target {s.TargetName})\n");
+        sb.Append($"  coefficients {i.Coefficients.Count} x {i.CoefBits} bits, scale P = {i.P}; samples {i.SampleBits} bits ({DesignText.CodingWord(i.Coding)}); products {i.ProductBits} bits; accumulator {i.AccBits} bits, {(i.Accumulator == AccumulatorMode.Wrap ? "wrap-around" : "saturating")}\n");
+        var post = i.Normalize == NormalizeMode.Shift ? "" : $" x {i.PostMultiplier} ({i.PostMultiplierBits} bits)";
+        sb.Append($"  output       acc{post} >> {i.Shift}, rounding {DesignText.RoundingWord(i.Rounding)}, saturated to {i.OutputBits} bits with {i.OutputFracBits} fractional bits (1 output LSB = 2^-{i.OutputFracBits} ADU)\n");
+        sb.Append($"  gain error   {Eng.Num(i.GainErrorPpm, 4)} ppm;  integer noise penalty {Eng.Num(i.NoisePenaltyPercent, 3)} %;  predicted output noise {Eng.Num(i.PredictedNoiseOutputLsb)} output LSB rms\n");
+        var table = new TextTable("check", "min", "max", "needs", "has", "margin", "");
+        foreach (var c in i.Proof.Checks)
+        {
+            var verdict = c.Fits ? "ok" : c.Required ? "DOES NOT FIT" : "exceeds (not needed for this accumulator)";
+            table.Add(c.Name.Replace('_', ' '), Eng.Int(c.MinValue), Eng.Int(c.MaxValue), Eng.Int(c.RequiredBits), Eng.Int(c.AvailableBits), (c.MarginBits >= 0 ? "+" : "") + Eng.Int(c.MarginBits), verdict);
+        }
+
+        sb.Append(table.Render());
+        sb.Append(i.Proof.Safe
+            ? "  proof        SAFE for every input inside the ADC range\n"
+            : "  proof        NOT SAFE: the datapath can overflow for some inputs inside the ADC range\n");
+        foreach (var advice in i.Proof.Advice)
+        {
+            sb.Append($"  change       {advice}\n");
+        }
+
+        sb.Append('\n');
+    }
+}

@@ -1,0 +1,78 @@
+using CoefGen.Core.Diagnostics;
+using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Noise;
+using CoefGen.Core.Prediction;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Weights;
+
+namespace CoefGen.Core.Pipeline;
+
+/// <summary>
+/// Runs the stages in order: description -> sampled covariance -> weights -> prediction -> integer design.
+/// Throws <see cref="InputException"/> with located diagnostics when the description cannot be realised
+/// (e.g. the fixed-point settings do not fit the target).
+/// </summary>
+public static class DesignPipeline
+{
+    /// <summary>Above this many weighted samples the frequency-domain cross-check is skipped (it is O(N * span)).</summary>
+    public const int FrequencyCheckLimit = 4096;
+
+    public static DesignResult Run(ReadoutDescription description, TargetCatalog catalog)
+    {
+        ArgumentNullException.ThrowIfNull(description);
+        ArgumentNullException.ThrowIfNull(catalog);
+
+        var resolution = FixedPointSettingsResolver.Resolve(description, catalog);
+        if (resolution.Settings is null || resolution.Diagnostics.Any(d => d.Severity == Severity.Error))
+        {
+            throw new InputException(resolution.Diagnostics);
+        }
+
+        var grid = SampleGrid.FromDescription(description);
+        var noise = NoiseModel.FromDescription(description);
+        var covariance = noise.Sample(grid);
+        var solver = OptimalSolverSelection.For(grid.Count);
+        var weights = SolveWeights(description, grid, covariance, solver);
+
+        Func<IReadOnlyList<double>, double>? frequencyDomain = grid.Count <= FrequencyCheckLimit
+            ? h => FrequencyDomainVariance.ComputeByComponent(noise, grid, h).Sum()
+            : null;
+        var predictions = weights
+            .Select(w => NoisePredictor.Predict(w, covariance, description.Adc, description.Sensor, frequencyDomain))
+            .ToArray();
+
+        var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
+        var t = description.Timing;
+        var integer = FixedPointDesigner.Design(
+            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal);
+
+        return new DesignResult
+        {
+            Description = description,
+            Grid = grid,
+            Noise = noise,
+            Covariance = covariance,
+            Weights = weights,
+            Predictions = predictions,
+            OptimalSolver = solver.Name,
+            FixedPointSettings = resolution.Settings,
+            Integer = integer,
+            Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning)],
+        };
+    }
+
+    private static IReadOnlyList<WeightSet> SolveWeights(ReadoutDescription d, SampleGrid grid, SampledCovariance r, IOptimalSolver solver)
+    {
+        try
+        {
+            return WeightSchemes.ComputeAll(grid, r, d.Weights, solver);
+        }
+        catch (CovarianceNotPositiveDefiniteException ex)
+        {
+            throw new InputException(Diagnostic.Error(
+                "CG1501",
+                d.LocationOf("noise"),
+                $"the noise covariance is not positive definite on the constraint null space ({ex.Message}); give the ADC some noise (adc.noise_lsb) or check the noise sources"));
+        }
+    }
+}
