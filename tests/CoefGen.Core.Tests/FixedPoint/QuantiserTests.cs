@@ -87,4 +87,18 @@ public class QuantiserTests
         Assert.True(r.QuadraticForm(refined) <= r.QuadraticForm(naive));
         Assert.Equal(65536, q.Coefficients.Skip(100).Sum());
     }
+
+    [Fact]
+    public void Exact_normalisation_realises_the_gain_with_a_post_multiplier_within_its_resolution()
+    {
+        // An 18-bit M lies in [2^16, 2^17): the relative gain error is at most 2^-17 (7.6 ppm), derived.
+        var g = FixedPointFixtures.Grid(100, 100);
+        var s = FixedPointFixtures.Settings(normalize: NormalizeMode.Exact, frac: 4);
+        var d = FixedPointFixtures.Design(g, FixedPointFixtures.Boxcar(g), FixedPointFixtures.White(g), s);
+        Assert.Equal(NormalizeMode.Exact, d.Normalize);
+        Assert.InRange(d.PostMultiplier, 1L << 16, (1L << 17) - 1);
+        Assert.InRange(Math.Abs(d.GainErrorPpm), 0, 7.63);
+        var gain = (double)d.Coefficients.Skip(100).Sum() * d.PostMultiplier / Math.ScaleB(1.0, d.Shift);
+        Assert.Equal(16.0, gain, 16.0 * 7.63e-6);
+    }
 }
