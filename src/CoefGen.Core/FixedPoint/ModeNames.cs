@@ -1,0 +1,44 @@
+namespace CoefGen.Core.FixedPoint;
+
+/// <summary>The spellings of the mode enums in TOML files (snake_case).</summary>
+public static class ModeNames
+{
+    public static IReadOnlyList<string> NormalizeNames { get; } = ["shift", "exact"];
+
+    public static IReadOnlyList<string> RoundingNames { get; } = ["half_up", "half_even", "truncate"];
+
+    public static IReadOnlyList<string> AccumulatorNames { get; } = ["wrap", "saturate"];
+
+    public static NormalizeMode? ParseNormalize(string text) => text switch
+    {
+        "shift" => NormalizeMode.Shift,
+        "exact" => NormalizeMode.Exact,
+        _ => null,
+    };
+
+    public static RoundingMode? ParseRounding(string text) => text switch
+    {
+        "half_up" => RoundingMode.HalfUp,
+        "half_even" => RoundingMode.HalfEven,
+        "truncate" => RoundingMode.Truncate,
+        _ => null,
+    };
+
+    public static AccumulatorMode? ParseAccumulator(string text) => text switch
+    {
+        "wrap" => AccumulatorMode.Wrap,
+        "saturate" => AccumulatorMode.Saturate,
+        _ => null,
+    };
+
+    public static string Name(NormalizeMode m) => m == NormalizeMode.Shift ? "shift" : "exact";
+
+    public static string Name(RoundingMode m) => m switch
+    {
+        RoundingMode.HalfUp => "half_up",
+        RoundingMode.HalfEven => "half_even",
+        _ => "truncate",
+    };
+
+    public static string Name(AccumulatorMode m) => m == AccumulatorMode.Wrap ? "wrap" : "saturate";
+}

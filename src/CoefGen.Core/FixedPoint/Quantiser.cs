@@ -1,0 +1,174 @@
+using CoefGen.Core.Noise;
+using CoefGen.Core.Weights;
+
+namespace CoefGen.Core.FixedPoint;
+
+/// <summary>
+/// Real weights to integers: c = round(h 2^P) with P as large as the coefficient width allows, repaired by the
+/// largest-remainder rule (PHYSICS.md §6) so that sum c = 0 exactly and, for a power-of-two gain, the signal
+/// window sums to 2^P; then refined by pairwise +-1 moves that keep those sums, keep every c_k at floor or ceil
+/// of h_k 2^P, and lower the noise c^T R c / (sum c s)^2.
+/// </summary>
+public static class Quantiser
+{
+    private const int CandidatesPerSide = 8;
+
+    /// <summary>Quantises <paramref name="h"/> (gain normalised to sum h s = 1 first).</summary>
+    /// <param name="h">Real weights, grid order.</param>
+    /// <param name="grid">The weighted samples and their step response s.</param>
+    /// <param name="r">Noise covariance at the samples (the refinement lowers c^T R c / (sum c s)^2).</param>
+    /// <param name="coefBits">Signed coefficient width.</param>
+    /// <param name="powerOfTwoGain">Require signal sum 2^P and reset sum -2^P (only meaningful for a settled grid).</param>
+    public static QuantisedWeights Quantise(IReadOnlyList<double> h, SampleGrid grid, SampledCovariance r, int coefBits, bool powerOfTwoGain)
+    {
+        ArgumentNullException.ThrowIfNull(h);
+        ArgumentNullException.ThrowIfNull(grid);
+        ArgumentNullException.ThrowIfNull(r);
+        var n = h.Count;
+        if (grid.Count != n || r.Count != n || n < 2)
+        {
+            throw new ArgumentException($"weights ({n}), grid ({grid.Count}) and covariance ({r.Count}) must agree, at least 2 entries");
+        }
+
+        if (coefBits is < 2 or > 62)
+        {
+            throw new ArgumentOutOfRangeException(nameof(coefBits), coefBits, "2..62");
+        }
+
+        var gain = 0.0;
+        for (var k = 0; k < n; k++)
+        {
+            gain += h[k] * grid.Step[k];
+        }
+
+        if (!(gain > 0) || h.Any(v => !double.IsFinite(v)))
+        {
+            throw new ArgumentException("weights must be finite with a positive gain sum h s");
+        }
+
+        var hn = h.Select(v => v / gain).ToArray();
+        var limit = (1L << (coefBits - 1)) - 1;
+        var maxAbs = hn.Max(Math.Abs);
+        var p = Math.Min(61, (int)Math.Floor(Math.Log2(limit / maxAbs)) + 1);
+        for (; p >= 0; p--)
+        {
+            var c = Repair(hn, grid, p, powerOfTwoGain, out var x);
+            if (c.Max(v => Math.Abs(v)) <= limit)
+            {
+                var moves = Refine(c, x, grid, r, limit, powerOfTwoGain);
+                return new QuantisedWeights(c, p, powerOfTwoGain, moves);
+            }
+        }
+
+        throw new ArgumentException("no scale fits the coefficient width");
+    }
+
+    /// <summary>Rounds at scale p and applies the largest-remainder repair per group; x receives h 2^p.</summary>
+    private static long[] Repair(double[] hn, SampleGrid grid, int p, bool powerOfTwoGain, out double[] x)
+    {
+        var scale = Math.ScaleB(1.0, p);
+        var xs = hn.Select(v => v * scale).ToArray();
+        var c = xs.Select(v => (long)Math.Round(v, MidpointRounding.ToEven)).ToArray();
+        var all = Enumerable.Range(0, c.Length).ToArray();
+        if (powerOfTwoGain)
+        {
+            var reset = all[..grid.ResetCount];
+            var signal = all[grid.ResetCount..];
+            FixSum(c, xs, reset, -(1L << p));
+            FixSum(c, xs, signal, 1L << p);
+        }
+        else
+        {
+            FixSum(c, xs, all, 0);
+        }
+
+        x = xs;
+        return c;
+    }
+
+    /// <summary>Moves |sum - target| entries by one count, those whose rounding went furthest in that direction first.</summary>
+    private static void FixSum(long[] c, double[] x, int[] group, long target)
+    {
+        var excess = group.Sum(k => c[k]) - target;
+        while (excess != 0)
+        {
+            var down = excess > 0;
+            var order = group
+                .OrderBy(k => down ? x[k] - c[k] : c[k] - x[k])
+                .ThenBy(k => k)
+                .Take((int)Math.Min(Math.Abs(excess), group.Length));
+            foreach (var k in order)
+            {
+                c[k] += down ? -1 : 1;
+                excess += down ? -1 : 1;
+            }
+        }
+    }
+
+    private static int Refine(long[] c, double[] x, SampleGrid grid, SampledCovariance r, long limit, bool powerOfTwoGain)
+    {
+        var n = c.Length;
+        var lo = new long[n];
+        var hi = new long[n];
+        for (var k = 0; k < n; k++)
+        {
+            lo[k] = Math.Max(-limit, Math.Min(c[k], (long)Math.Floor(x[k])));
+            hi[k] = Math.Min(limit, Math.Max(c[k], (long)Math.Ceiling(x[k])));
+        }
+
+        var all = Enumerable.Range(0, n).ToArray();
+        int[][] windows = powerOfTwoGain ? [all[..grid.ResetCount], all[grid.ResetCount..]] : [all];
+        var state = new RefinementState(c, grid.Step, r);
+        var cap = (4 * n) + 100;
+        var moves = 0;
+        while (moves < cap)
+        {
+            var best = BestMove(state, windows, lo, hi, full: false) ?? BestMove(state, windows, lo, hi, full: true);
+            if (best is not var (i, j))
+            {
+                break;
+            }
+
+            state.Apply(i, j);
+            moves++;
+        }
+
+        return moves;
+    }
+
+    /// <summary>The pair (up, down) that lowers the objective most: among the steepest candidates, or among all pairs.</summary>
+    private static (int Up, int Down)? BestMove(RefinementState s, int[][] windows, long[] lo, long[] hi, bool full)
+    {
+        (int, int)? best = null;
+        var bestValue = s.Objective * (1 - 1e-12);
+        foreach (var w in windows)
+        {
+            var ups = w.Where(k => s.C[k] < hi[k]);
+            var downs = w.Where(k => s.C[k] > lo[k]);
+            if (!full)
+            {
+                ups = ups.OrderBy(k => s.G[k]).ThenBy(k => k).Take(CandidatesPerSide);
+                downs = downs.OrderByDescending(k => s.G[k]).ThenBy(k => k).Take(CandidatesPerSide);
+            }
+
+            var downList = downs.ToArray();
+            foreach (var i in ups)
+            {
+                foreach (var j in downList)
+                {
+                    if (i != j)
+                    {
+                        var v = s.ObjectiveAfter(i, j);
+                        if (v < bestValue)
+                        {
+                            bestValue = v;
+                            best = (i, j);
+                        }
+                    }
+                }
+            }
+        }
+
+        return best;
+    }
+}
