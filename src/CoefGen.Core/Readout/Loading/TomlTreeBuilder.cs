@@ -8,7 +8,7 @@ internal static class TomlTreeBuilder
 {
     public static TomlTable Build(DocumentSyntax document, string file)
     {
-        var root = new TomlTable("", new SourceLocation(file, 1, 1));
+        var root = new TomlTable("", SourceLocation.FileOnly(file)); // missing top-level keys are blamed on the file
         foreach (var kv in document.KeyValues)
         {
             AddKeyValue(root, kv, file);
