@@ -144,30 +144,34 @@ public static class ReadoutWriter
 
     /// <summary>
     /// The sample position whose quotient by the rate is exactly the stored transfer time (the loader
-    /// computes transfer_sample / rate); searched a few ulps around t * rate, else the nearest value.
+    /// computes transfer_sample / rate): the shortest such number among t * rate, its neighbours a few
+    /// ulps away and its decimal roundings; t * rate itself when none divides back exactly.
     /// </summary>
     private static double TransferSample(double transferTimeS, double rateHz)
     {
         var guess = transferTimeS * rateHz;
+        var candidates = new List<double> { guess };
         var up = guess;
         var down = guess;
         for (var i = 0; i < 8; i++)
         {
-            if (up / rateHz == transferTimeS)
-            {
-                return up;
-            }
-
-            if (down / rateHz == transferTimeS)
-            {
-                return down;
-            }
-
             up = Math.BitIncrement(up);
             down = Math.BitDecrement(down);
+            candidates.Add(up);
+            candidates.Add(down);
         }
 
-        return guess;
+        for (var digits = 0; digits <= 15; digits++)
+        {
+            candidates.Add(Math.Round(guess, digits, MidpointRounding.AwayFromZero));
+        }
+
+        return candidates
+            .Where(c => c >= 0 && c / rateHz == transferTimeS)
+            .OrderBy(c => Num(c).Length)
+            .ThenBy(c => Math.Abs(c - guess))
+            .DefaultIfEmpty(guess)
+            .First();
     }
 
     private static void Optional(StringBuilder w, string key, string? value)

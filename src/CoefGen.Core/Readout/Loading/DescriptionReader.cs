@@ -14,9 +14,9 @@ internal static partial class DescriptionReader
         root.RejectUnknown("name", "adc", "sensor", "timing", "noise", "weights", "fixed_point", "emit");
         var name = ReadName(root);
         var adc = AdcSectionReader.Read(root, out var rate);
-        var sensor = SensorSectionReader.Read(root);
+        var sensor = SensorSectionReader.Read(root, out var gain);
         var timingInput = TimingSectionReader.Read(root);
-        var noise = NoiseSectionReader.Read(root, sensor?.Gain, out var poleGiven);
+        var noise = NoiseSectionReader.Read(root, gain, out var poleGiven);
         var timing = timingInput is null ? null : TimingResolver.Resolve(timingInput, rate, poleGiven, context);
         var weights = WeightsSectionReader.Read(root, timing);
         var fixedPoint = FixedPointSectionReader.Read(root);

@@ -56,10 +56,10 @@ internal sealed class TableReader
             }
 
             var suggestion = DidYouMean.Suggest(entry.Key, allowed);
-            var hint = suggestion is null ? "" : $"; did you mean '{suggestion}'?";
+            var hint = suggestion is null ? "" : $" (did you mean '{suggestion}'?)";
             var what = entry.Kind == TomlEntryKind.Value ? "key" : "table";
             Context.Error(ReadoutCodes.UnknownKey, entry.KeyLocation, entry.Path,
-                $"unknown {what} '{entry.Key}' in {Title}{hint} Allowed here: {string.Join(", ", allowed)}");
+                $"unknown {what} '{entry.Key}' in {Title}{hint}; allowed here: {string.Join(", ", allowed)}");
         }
     }
 

@@ -30,7 +30,7 @@ internal static class ValueReader
             case StringValueSyntax text:
                 if (!SiQuantity.TryParse(text.Value ?? "", unit, out value, out var reason))
                 {
-                    table.Context.Error(ReadoutCodes.WrongType, entry.ValueLocation, entry.Path, $"'{key}': {reason}");
+                    table.Context.Error(ReadoutCodes.WrongType, entry.ValueLocation, entry.Path, reason);
                     return null;
                 }
 
@@ -127,9 +127,9 @@ internal static class ValueReader
         }
 
         var suggestion = DidYouMean.Suggest(text.Value ?? "", words.Select(w => w.Word));
-        var hint = suggestion is null ? "" : $"; did you mean \"{suggestion}\"?";
+        var hint = suggestion is null ? "" : $" (did you mean \"{suggestion}\"?)";
         table.Context.Error(ReadoutCodes.NotAllowedWord, entry.ValueLocation, entry.Path,
-            $"'{key}' = \"{text.Value}\" is not allowed{hint} Allowed: {allowed}");
+            $"'{key}' = \"{text.Value}\" is not allowed{hint}; allowed: {allowed}");
         return null;
     }
 
