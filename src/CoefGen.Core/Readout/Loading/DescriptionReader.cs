@@ -1,0 +1,63 @@
+using System.Text.RegularExpressions;
+
+namespace CoefGen.Core.Readout.Loading;
+
+/// <summary>Reads every section of a parsed readout file and assembles the description when nothing is wrong.</summary>
+internal static partial class DescriptionReader
+{
+    [GeneratedRegex("^[A-Za-z][A-Za-z0-9_]*$", RegexOptions.CultureInvariant)]
+    private static partial Regex Identifier();
+
+    public static ReadoutDescription? Read(TomlTable document, LoadContext context, string contentSha256)
+    {
+        var root = new TableReader(context, document);
+        root.RejectUnknown("name", "adc", "sensor", "timing", "noise", "weights", "fixed_point", "emit");
+        var name = ReadName(root);
+        var adc = AdcSectionReader.Read(root, out var rate);
+        var sensor = SensorSectionReader.Read(root, out var gain);
+        var timingInput = TimingSectionReader.Read(root);
+        var noise = NoiseSectionReader.Read(root, gain, out var poleGiven);
+        var timing = timingInput is null ? null : TimingResolver.Resolve(timingInput, rate, poleGiven, context);
+        var weights = WeightsSectionReader.Read(root, timing);
+        var fixedPoint = FixedPointSectionReader.Read(root);
+        var emit = EmitSectionReader.Read(root);
+        if (context.Bag.HasErrors || name is null || adc is null || sensor is null || timing is null
+            || noise is null || weights is null || fixedPoint is null || emit is null)
+        {
+            return null;
+        }
+
+        return new ReadoutDescription
+        {
+            Name = name,
+            SourcePath = context.File,
+            ContentSha256 = contentSha256,
+            Adc = adc,
+            Sensor = sensor,
+            Timing = timing,
+            Noise = noise,
+            Weights = weights,
+            FixedPoint = fixedPoint,
+            Emit = emit,
+            KeyLocations = context.Locations,
+        };
+    }
+
+    private static string? ReadName(TableReader root)
+    {
+        var name = root.Text("name", required: true, allowEmpty: true);
+        if (name is null)
+        {
+            return null;
+        }
+
+        if (!Identifier().IsMatch(name))
+        {
+            root.Context.Error(ReadoutCodes.BadIdentifier, root.Entry("name")!.ValueLocation, "name",
+                $"name = \"{name}\" is not an identifier; it prefixes emitted code, so use a letter followed by letters, digits or '_'");
+            return null;
+        }
+
+        return name;
+    }
+}

@@ -1,0 +1,36 @@
+namespace CoefGen.Core.Readout;
+
+/// <summary>Stable diagnostic codes of the readout stage (CG0xxx syntax, CG1xxx readout rules).</summary>
+public static class ReadoutCodes
+{
+    /// <summary>Not UTF-8 text, or a TOML syntax error.</summary>
+    public const string TomlSyntax = "CG0001";
+
+    public const string UnknownKey = "CG1001";
+    public const string MissingKey = "CG1002";
+    public const string WrongType = "CG1003";
+    public const string OutOfRange = "CG1004";
+    public const string NotAllowedWord = "CG1005";
+    public const string ExactlyOneOf = "CG1006";
+    public const string DuplicateSourceName = "CG1007";
+    public const string BadIdentifier = "CG1008";
+
+    public const string WindowOutsideCycle = "CG1201";
+    public const string WindowsOverlap = "CG1202";
+    public const string WindowEmptyAfterRounding = "CG1203";
+    public const string TransferOutOfOrder = "CG1204";
+    public const string SignalBeforeReset = "CG1205";
+
+    public const string PsdTableUnreadable = "CG1301";
+    public const string PsdTableBadLine = "CG1302";
+    public const string PsdTableNotIncreasing = "CG1303";
+    public const string PsdTableNegativeDensity = "CG1304";
+    public const string PsdTableTooShort = "CG1305";
+    public const string NoNoise = "CG1306";
+    public const string UnboundedNoise = "CG1307";
+    public const string LowCutoffAboveCorner = "CG1308";
+
+    public const string ExplicitShape = "CG1401";
+    public const string ShapeWithoutExplicit = "CG1402";
+    public const string PoleStepWithoutPole = "CG1403";
+}
