@@ -7,17 +7,24 @@ namespace CoefGen.Core.Noise;
 /// hᵀRh computed in the frequency domain, independently of the lag tables (PHYSICS §3–5):
 /// ∫_0^∞ S(f)|H(f)|² df + σ_d² Σh², H(f) = Σ h_k exp(-j2πf t_k). On the ADC grid |H|² is f_s-periodic,
 /// so the integral is taken over [0, f_s/2] against the folded spectrum
-/// S_fold(f) = S(f) + Σ_{m=1}^{300} [S(m f_s - f) + S(m f_s + f)] + analytic tail. Integration: log-f panels
-/// below 0.05/span, then Gauss–Legendre panels no wider than 1/(4·span), cut at every folded breakpoint.
+/// S_fold(f) = S(f) + Σ_{m=1}^{M} [S(m f_s - f) + S(m f_s + f)] + tail. The tail is the Euler–Maclaurin
+/// midpoint sum: (1/f_s)∫_{(M+½)f_s ± f}^∞ S (analytic) + (f_s/24) S'((M+½)f_s ± f); with M ≥ 24 beyond the
+/// last breakpoint its error is ~3e-2/M⁴ of the tail, below that of 300 aliases with the plain midpoint tail
+/// (1/(12·300²)), at a twelfth of the cost. Integration: log-f panels below 0.05/span, then 6-point
+/// Gauss–Legendre panels no wider than 1/(4·span) (error ~4e-14 per panel on the highest lag), cut at
+/// every folded breakpoint. |H|² by Horner's rule, two nodes at a time.
 /// For 1/f components the weights must satisfy Σh = 0 (otherwise the true variance is infinite or
 /// depends on the low cutoff, and the result is only the part above 1e-10·0.05/span).
 /// </summary>
 public static class FrequencyDomainVariance
 {
-    /// <summary>Aliases summed explicitly before the analytic tail.</summary>
-    public const int AliasCount = 300;
+    /// <summary>Least number of aliases summed explicitly before the tail (more when breakpoints lie further out).</summary>
+    public const int MinAliasCount = 24;
 
-    private const int Order = 8;
+    /// <summary>Most aliases summed explicitly; breakpoints beyond are folded into the tail.</summary>
+    public const int MaxAliasCount = 300;
+
+    private const int Order = 6;
     private const double LogPanelWidth = 0.5;
     private static readonly GaussLegendreRule Rule = new(-1, 1, Order);
 
@@ -68,7 +75,8 @@ public static class FrequencyDomainVariance
         var logStart = 1e-10 * logEnd;
         var cuts = FoldedBreakpoints(model, fs, logStart, nyquist);
 
-        var result = new double[model.Components.Count];
+        var nodes = new List<double>();
+        var weights = new List<double>();
         void AddPanel(double a, double b, bool logScale)
         {
             var mid = 0.5 * (a + b);
@@ -77,11 +85,8 @@ public static class FrequencyDomainVariance
             {
                 var x = mid + half * Rule.Abscissas[i];
                 var f = logScale ? Math.Exp(x) : x;
-                var w = half * Rule.Weights[i] * (logScale ? f : 1) * TransferSquared(coef, f / fs);
-                for (var c = 0; c < result.Length; c++)
-                {
-                    result[c] += w * Folded(model.Components[c], f, fs);
-                }
+                nodes.Add(f);
+                weights.Add(half * Rule.Weights[i] * (logScale ? f : 1));
             }
         }
 
@@ -108,43 +113,85 @@ public static class FrequencyDomainVariance
             }
         }
 
+        var aliases = new int[model.Components.Count];
+        for (var c = 0; c < aliases.Length; c++)
+        {
+            aliases[c] = AliasesFor(model.Components[c], fs);
+        }
+
+        var result = new double[model.Components.Count];
+        for (var j = 0; j < nodes.Count; j += 2)
+        {
+            var second = Math.Min(j + 1, nodes.Count - 1);
+            var (h1, h2) = TransferSquared(coef, nodes[j] / fs, nodes[second] / fs);
+            for (var c = 0; c < result.Length; c++)
+            {
+                result[c] += weights[j] * h1 * Folded(model.Components[c], nodes[j], fs, aliases[c]);
+                if (second != j)
+                {
+                    result[c] += weights[second] * h2 * Folded(model.Components[c], nodes[second], fs, aliases[c]);
+                }
+            }
+        }
+
         return result;
     }
 
-    /// <summary>S_fold(f): the spectrum plus its aliases, then (1/f_s)∫ of the rest (midpoint rule over aliases).</summary>
-    private static double Folded(NoiseComponent c, double f, double fs)
+    /// <summary>Explicit aliases: every breakpoint (brick-wall, table end) inside, at least MinAliasCount.</summary>
+    private static int AliasesFor(NoiseComponent c, double fs)
     {
-        var s = c.Psd(f);
-        var aliases = AliasCount;
         if (double.IsFinite(c.UpperLimitHz))
         {
-            aliases = (int)Math.Min(AliasCount, Math.Ceiling(c.UpperLimitHz / fs) + 1);
+            return (int)Math.Min(MaxAliasCount, Math.Ceiling(c.UpperLimitHz / fs) + 1);
         }
 
+        var last = c.Breakpoints.Count == 0 ? 0 : c.Breakpoints.Max();
+        return (int)Math.Min(MaxAliasCount, Math.Max(MinAliasCount, Math.Ceiling(last / fs) + MinAliasCount));
+    }
+
+    /// <summary>S_fold(f): the spectrum, its first aliases, then the Euler–Maclaurin midpoint tail.</summary>
+    private static double Folded(NoiseComponent c, double f, double fs, int aliases)
+    {
+        var s = c.Psd(f);
         for (var m = 1; m <= aliases; m++)
         {
             s += c.Psd(m * fs - f) + c.Psd(m * fs + f);
         }
 
         var edge = (aliases + 0.5) * fs;
-        return s + (c.PsdIntegralAbove(edge - f) + c.PsdIntegralAbove(edge + f)) / fs;
-    }
-
-    /// <summary>|Σ_m c_m e^{-j2π m x}|² by Horner's rule (x = f / f_s).</summary>
-    private static double TransferSquared(double[] coef, double x)
-    {
-        var (sin, cos) = Math.SinCos(2 * Math.PI * x);
-        var zr = cos;
-        var zi = -sin;
-        double re = coef[^1], im = 0;
-        for (var m = coef.Length - 2; m >= 0; m--)
+        if (edge - f >= c.UpperLimitHz)
         {
-            var nr = re * zr - im * zi + coef[m];
-            im = re * zi + im * zr;
-            re = nr;
+            return s;
         }
 
-        return re * re + im * im;
+        return s + Tail(c, edge - f, fs) + Tail(c, edge + f, fs);
+    }
+
+    /// <summary>Σ_{m≥0} S(u + (m+½) f_s) ≈ (1/f_s)∫_{u}^∞ S + (f_s/24) S'(u) (Euler–Maclaurin, midpoint form).</summary>
+    private static double Tail(NoiseComponent c, double u, double fs)
+    {
+        var step = 1e-3 * u;
+        var slope = (c.Psd(u + step) - c.Psd(u - step)) / (2 * step);
+        return c.PsdIntegralAbove(u) / fs + fs / 24 * slope;
+    }
+
+    /// <summary>|Σ_m c_m e^{-j2π m x}|² at two points by Horner's rule (two chains for instruction-level parallelism).</summary>
+    private static (double First, double Second) TransferSquared(double[] coef, double x1, double x2)
+    {
+        var (s1, c1) = Math.SinCos(2 * Math.PI * x1);
+        var (s2, c2) = Math.SinCos(2 * Math.PI * x2);
+        double re1 = coef[^1], im1 = 0, re2 = coef[^1], im2 = 0;
+        for (var m = coef.Length - 2; m >= 0; m--)
+        {
+            var n1 = re1 * c1 + im1 * s1 + coef[m];
+            im1 = im1 * c1 - re1 * s1;
+            re1 = n1;
+            var n2 = re2 * c2 + im2 * s2 + coef[m];
+            im2 = im2 * c2 - re2 * s2;
+            re2 = n2;
+        }
+
+        return (re1 * re1 + im1 * im1, re2 * re2 + im2 * im2);
     }
 
     private static List<double> FoldedBreakpoints(NoiseModel model, double fs, double low, double high)
@@ -154,7 +201,7 @@ public static class FrequencyDomainVariance
         {
             foreach (var b in c.Breakpoints)
             {
-                if (b > (AliasCount + 1) * fs)
+                if (b > (MaxAliasCount + 1) * fs)
                 {
                     continue;
                 }

@@ -14,11 +14,12 @@ public class FrequencyDomainVarianceTests(ITestOutputHelper output)
     private const double Tolerance = 1e-6;
 
     public static TheoryData<string> Configurations =>
-        ["white+pole", "1/f+pole", "white brick-wall", "1/f brick-wall", "white brick-wall above Nyquist", "pole+brick-wall", "table", "everything"];
+        ["white+pole", "white+pole above the sample rate", "1/f+pole", "white brick-wall", "1/f brick-wall", "white brick-wall above Nyquist", "pole+brick-wall", "table", "everything"];
 
     private static NoiseModel ModelFor(string name) => name switch
     {
         "white+pole" => NoiseTestData.Model(0, ParametricNoiseComponent.White("w", E2, 1e6, null)),
+        "white+pole above the sample rate" => NoiseTestData.Model(0, ParametricNoiseComponent.White("w", E2, 130e6, null)),
         "1/f+pole" => NoiseTestData.Model(0, ParametricNoiseComponent.Flicker("f", E2 * 5e4, 1, 2e6, null)),
         "white brick-wall" => NoiseTestData.Model(0, ParametricNoiseComponent.White("w", E2, null, 15e6)),
         "1/f brick-wall" => NoiseTestData.Model(0, ParametricNoiseComponent.Flicker("f", E2 * 5e4, 0.1, null, 15e6)),
