@@ -48,6 +48,7 @@ public class FrequencyDomainVarianceTests(ITestOutputHelper output)
             {
                 var time = model.Sample(grid).QuadraticForm(h);
                 var frequency = FrequencyDomainVariance.Compute(model, grid, h);
+                output.WriteLine($"{configuration}, {grid.Count} samples: relative difference {(frequency - time) / time:e2}");
                 Assert.True(Math.Abs(time - frequency) < Tolerance * time, $"{configuration}: {time} vs {frequency} ({(frequency - time) / time:e2})");
             }
         }
