@@ -25,12 +25,15 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
         var y = basis.SolveTransposedTriangle(rejectDrift ? [0.0, 1.0, 0.0] : [0.0, 1.0]);
 
         var c = new double[n * n];
+        var scale = 0.0;
         for (var i = 0; i < n; i++)
         {
             for (var j = 0; j < n; j++)
             {
                 c[(i * n) + j] = r.At(i, j);
             }
+
+            scale = Math.Max(scale, Math.Abs(c[(i * n) + i]));
         }
 
         // M = Q^T R Q; with h = Q [y; z], minimising [y; z]^T M [y; z] over z gives M22 z = -M21 y.
@@ -61,7 +64,7 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
 
         if (k > 0)
         {
-            CholeskyInPlace.Factor(c, n, m, k);
+            CholeskyInPlace.Factor(c, n, m, k, scale);
             CholeskyInPlace.Solve(c, n, m, k, z);
         }
 
