@@ -129,7 +129,7 @@ public static partial class HdlBenches
             sb.Append("/* verilator lint_off DECLFILENAME */\n");
         }
 
-        foreach (var n in names.Where(n => n != "COEF" && !n.EndsWith("_COEF", StringComparison.Ordinal)))
+        foreach (var n in names.Where(n => n is not ("COEF" or "SAMPLE_INDEX")))
         {
             sb.Append($"  assign o_{n} = 64'({scope}{n});\n");
         }

@@ -8,6 +8,8 @@ namespace CoefGen.Core.Tests.Toolchain;
 /// </summary>
 public static class ToolRunner
 {
+    private static readonly object LogLock = new();
+
     public static ToolResult Run(string exe, string workDir, TimeSpan timeout, params string[] args)
     {
         var psi = new ProcessStartInfo(exe)
@@ -39,7 +41,18 @@ public static class ToolRunner
         p.WaitForExit();
         sw.Stop();
         var result = new ToolResult(command, p.ExitCode, stdout.Result, stderr.Result, sw.Elapsed);
-        TestContext.Current.TestOutputHelper?.WriteLine($"[{sw.Elapsed.TotalSeconds:F3} s] {command} -> {p.ExitCode}");
+        var line = $"[{sw.Elapsed.TotalSeconds:F3} s] {command} -> {p.ExitCode}";
+        TestContext.Current.TestOutputHelper?.WriteLine(line);
+
+        // Optional timing log for measurements (COEFGEN_TOOL_TIMINGS=file).
+        var log = Environment.GetEnvironmentVariable("COEFGEN_TOOL_TIMINGS");
+        if (!string.IsNullOrEmpty(log))
+        {
+            lock (LogLock)
+            {
+                File.AppendAllText(log, line + "\n");
+            }
+        }
         return result;
     }
 

@@ -3,8 +3,8 @@
 // Scheme: optimal; predicted read noise 3.25 e- rms, 1.0625 ADU rms.
 // Width proof: safe for ADC inputs inside the stated range.
 // Generated file: regenerate from the readout file instead of editing. Verify in simulation and on the
-// bench before use. coef_at works in every simulator; the COEF array is hidden from Icarus, which
-// rejects unpacked localparam arrays.
+// bench before use. coef_at/sample_index_at work in every simulator: array-based where unpacked
+// localparam arrays are accepted, case-based under Icarus, which rejects them.
 
 package red_ch0_coefs_pkg;
   localparam int PIXEL_SAMPLES = 16;
@@ -34,7 +34,40 @@ package red_ch0_coefs_pkg;
 
   typedef logic signed [COEF_BITS-1:0] coef_t;
 
-  // Integer coefficient per weighted sample, time order (reset window first); real weight = coef / 2**P.
+`ifndef __ICARUS__
+  // Integer coefficient per weighted sample, time order (reset window first); real weight = COEF / 2**P.
+  localparam coef_t COEF [COEF_COUNT] = '{
+    -18'sd150,
+    -18'sd362,
+    -18'sd362,
+    -18'sd150,
+    18'sd200,
+    18'sd312,
+    18'sd312,
+    18'sd200
+  };
+
+  // Index of each coefficient's sample inside the pixel cycle.
+  localparam int SAMPLE_INDEX [COEF_COUNT] = '{
+    2,
+    3,
+    4,
+    5,
+    9,
+    10,
+    11,
+    12
+  };
+
+  function automatic coef_t coef_at(input int index);
+    return (index >= 0 && index < COEF_COUNT) ? COEF[index] : '0;
+  endfunction
+
+  function automatic int sample_index_at(input int index);
+    return (index >= 0 && index < COEF_COUNT) ? SAMPLE_INDEX[index] : -1;
+  endfunction
+`else
+  // Icarus: case-based functions (a linear search per call; fine for a few thousand coefficients).
   function automatic coef_t coef_at(input int index);
     case (index)
       0: coef_at = -18'sd150;
@@ -49,7 +82,6 @@ package red_ch0_coefs_pkg;
     endcase
   endfunction
 
-  // Index of each coefficient's sample inside the pixel cycle.
   function automatic int sample_index_at(input int index);
     case (index)
       0: sample_index_at = 2;
@@ -63,17 +95,5 @@ package red_ch0_coefs_pkg;
       default: sample_index_at = -1;
     endcase
   endfunction
-
-`ifndef __ICARUS__
-  localparam coef_t COEF [COEF_COUNT] = '{
-    -18'sd150,
-    -18'sd362,
-    -18'sd362,
-    -18'sd150,
-    18'sd200,
-    18'sd312,
-    18'sd312,
-    18'sd200
-  };
 `endif
 endpackage
