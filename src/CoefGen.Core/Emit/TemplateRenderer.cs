@@ -118,7 +118,8 @@ public static class TemplateRenderer
         {
             IncludeRefusedException r => r.Code,
             ScriptParserRuntimeException => TemplateDiagnosticCodes.SyntaxError,
-            _ when message.Contains("iteration limit", StringComparison.OrdinalIgnoreCase) => TemplateDiagnosticCodes.LoopLimit,
+            _ when message.Contains("iteration limit", StringComparison.OrdinalIgnoreCase)
+                || message.Contains("LoopLimit", StringComparison.Ordinal) => TemplateDiagnosticCodes.LoopLimit,
             _ when message.Contains("recursive depth limit", StringComparison.OrdinalIgnoreCase) => TemplateDiagnosticCodes.RecursionLimit,
             _ when message.Contains("limit", StringComparison.OrdinalIgnoreCase)
                 && (message.Contains("output", StringComparison.OrdinalIgnoreCase) || message.Contains("string", StringComparison.OrdinalIgnoreCase))
