@@ -1,0 +1,4 @@
+namespace CoefGen.Core.Emit;
+
+/// <summary>The staleness of one output path.</summary>
+public sealed record StalenessEntry(string RelativePath, StalenessStatus Status);

@@ -1,0 +1,176 @@
+using System.Numerics;
+using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Readout;
+using Scriban.Runtime;
+using static CoefGen.Core.Emit.ModelBuilder;
+
+namespace CoefGen.Core.Emit;
+
+/// <summary>
+/// The one read-only model every template sees, built from an <see cref="IntegerDesign"/> and its
+/// <see cref="Provenance"/>. Templates get only plain values (strings, integers, booleans and read-only
+/// arrays/objects of those) as top-level variables; every field is listed in templates/README.md.
+/// Numbers that may exceed 64 bits, and all reals, are pre-formatted strings (invariant culture).
+/// </summary>
+public sealed class TemplateModel
+{
+    private TemplateModel(ScriptObject globals, string prefix, int largestArray)
+    {
+        Globals = globals;
+        Prefix = prefix;
+        LargestArrayLength = largestArray;
+    }
+
+    /// <summary>The identifier prefix (see <see cref="IdentifierPrefix"/>).</summary>
+    public string Prefix { get; }
+
+    /// <summary>Length of the longest array in the model; sizes the renderer's loop limit.</summary>
+    public int LargestArrayLength { get; }
+
+    /// <summary>The read-only top-level variables.</summary>
+    internal ScriptObject Globals { get; }
+
+    /// <summary>
+    /// Builds the model. Throws <see cref="ArgumentException"/> when the design is inconsistent (array
+    /// lengths, coefficients outside CoefBits, widths outside 1..64): such a design is a bug upstream.
+    /// </summary>
+    public static TemplateModel Create(IntegerDesign design, Provenance provenance)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        ArgumentNullException.ThrowIfNull(provenance);
+        Validate(design);
+        var d = design;
+        var g = new ScriptObject();
+        var prefix = IdentifierPrefix.FromName(d.Name);
+        Set(g, "name", ModelText.CommentSafe(d.Name));
+        Set(g, "prefix", prefix);
+        Set(g, "prefix_upper", prefix.ToUpperInvariant());
+        Set(g, "tool_name", ModelText.CommentSafe(provenance.ToolName));
+        Set(g, "tool_version", ModelText.CommentSafe(provenance.ToolVersion));
+        Set(g, "readout_file", ModelText.CommentSafe(provenance.ReadoutFileName));
+        Set(g, "readout_sha256", ModelText.CommentSafe(provenance.ReadoutSha256));
+        Set(g, "scheme", ModelText.CommentSafe(provenance.SchemeLabel));
+        Set(g, "noise_e", LiteralFormat.RoundTrip(provenance.PredictedReadNoiseElectrons));
+        Set(g, "noise_adu", LiteralFormat.RoundTrip(provenance.PredictedReadNoiseAdu));
+
+        Set(g, "pixel_samples", d.PixelSamples);
+        Set(g, "reset_start", d.Reset.Start);
+        Set(g, "reset_count", d.Reset.Count);
+        Set(g, "signal_start", d.Signal.Start);
+        Set(g, "signal_count", d.Signal.Count);
+        Set(g, "coef_count", d.Coefficients.Count);
+        Set(g, "sample_index", Array(d.SampleIndex));
+        Set(g, "last_index", d.Coefficients.Count - 1);
+
+        var wideC = d.CoefBits > 32;
+        Coefficients(g, d, wideC);
+        Set(g, "coef_wide", wideC);
+        Set(g, "coef_c_type", wideC ? "int64_t" : "int32_t");
+        Set(g, "coef_min", d.Coefficients.Min());
+        Set(g, "coef_max", d.Coefficients.Max());
+
+        Set(g, "adc_bits", d.AdcBits);
+        Set(g, "sample_bits", d.SampleBits);
+        Set(g, "coef_bits", d.CoefBits);
+        Set(g, "product_bits", d.ProductBits);
+        Set(g, "acc_bits", d.AccBits);
+        Set(g, "output_bits", d.OutputBits);
+        Set(g, "output_frac_bits", d.OutputFracBits);
+        Set(g, "post_multiplier_bits", d.PostMultiplierBits);
+        var scaledBits = d.AccBits + d.PostMultiplierBits;
+        Set(g, "scaled_bits", scaledBits);
+        Set(g, "p", d.P);
+        Set(g, "shift", d.Shift);
+
+        Set(g, "post_multiplier", d.PostMultiplier);
+        Set(g, "post_multiplier_c", LiteralFormat.C(d.PostMultiplier, wide: true));
+        Set(g, "post_multiplier_sv", LiteralFormat.VerilogSigned(d.PostMultiplier, 64));
+        Set(g, "post_multiplier_fits_int32", d.PostMultiplier is >= int.MinValue and <= int.MaxValue);
+
+        var rc = d.RoundingConstant;
+        var rcBits = d.Shift + 1;
+        Set(g, "rounding_constant", LiteralFormat.DecimalText(rc));
+        Set(g, "rounding_constant_c", LiteralFormat.C(rc, wide: true));
+        Set(g, "rounding_constant_sv", LiteralFormat.VerilogSigned(rc, 64));
+        Set(g, "rounding_constant_bits", rcBits);
+        Set(g, "rounding_constant_vhdl_bits", LiteralFormat.VhdlBits(rc, rcBits));
+        Set(g, "rounding_constant_fits_int32", rc <= int.MaxValue);
+
+        Set(g, "rounding", ModelText.Word(d.Rounding));
+        Set(g, "round_half_up", d.Rounding == RoundingMode.HalfUp);
+        Set(g, "round_half_even", d.Rounding == RoundingMode.HalfEven);
+        Set(g, "round_truncate", d.Rounding == RoundingMode.Truncate);
+        Set(g, "accumulator", ModelText.Word(d.Accumulator));
+        Set(g, "saturate", d.Accumulator == AccumulatorMode.Saturate);
+        Set(g, "normalize", ModelText.Word(d.Normalize));
+        Set(g, "coding", ModelText.Word(d.Coding));
+        var offsetBinary = d.Coding == AdcCoding.OffsetBinary;
+        Set(g, "offset_binary", offsetBinary);
+        var adcOffset = offsetBinary ? 1L << (d.AdcBits - 1) : 0L;
+        Set(g, "adc_offset", adcOffset);
+        Set(g, "adc_offset_c", LiteralFormat.C(adcOffset, wide: false));
+
+        Ranges(g, d);
+        Set(g, "proof", Proof(d.Proof));
+        Set(g, "proof_safe", d.Proof.Safe);
+        Set(g, "gain_error_ppm", LiteralFormat.RoundTrip(d.GainErrorPpm));
+        Set(g, "noise_penalty_percent", LiteralFormat.RoundTrip(d.NoisePenaltyPercent));
+        Set(g, "predicted_noise_output_lsb", LiteralFormat.RoundTrip(d.PredictedNoiseOutputLsb));
+
+        // The C reference function works in int64_t; it is emitted only when every intermediate fits.
+        var cApply = d.ProductBits <= 62 && scaledBits + 1 <= 62 && d.AccBits <= 62 && d.Shift <= 61 && d.AdcBits <= 31
+            && d.OutputBits <= 63;
+        Set(g, "c_apply_supported", cApply);
+        g.IsReadOnly = true;
+        return new TemplateModel(g, prefix, d.Coefficients.Count);
+    }
+
+    private static void Ranges(ScriptObject g, IntegerDesign d)
+    {
+        var (accMin, accMax) = SignedRange(d.AccBits);
+        var (outMin, outMax) = SignedRange(d.OutputBits);
+        Set(g, "acc_min", LiteralFormat.DecimalText(accMin));
+        Set(g, "acc_max", LiteralFormat.DecimalText(accMax));
+        Set(g, "acc_min_c", LiteralFormat.C((long)accMin, wide: true));
+        Set(g, "acc_max_c", LiteralFormat.C((long)accMax, wide: true));
+        Set(g, "output_min", LiteralFormat.DecimalText(outMin));
+        Set(g, "output_max", LiteralFormat.DecimalText(outMax));
+        Set(g, "output_min_c", LiteralFormat.C((long)outMin, wide: true));
+        Set(g, "output_max_c", LiteralFormat.C((long)outMax, wide: true));
+        Set(g, "output_min_sv", LiteralFormat.VerilogSigned(outMin, d.OutputBits));
+        Set(g, "output_max_sv", LiteralFormat.VerilogSigned(outMax, d.OutputBits));
+    }
+
+    private static void Validate(IntegerDesign d)
+    {
+        var n = d.Coefficients.Count;
+        if (n == 0 || d.SampleIndex.Count != n || d.Reset.Count + d.Signal.Count != n)
+        {
+            throw new ArgumentException("coefficients, sample indices and window counts disagree", nameof(d));
+        }
+
+        foreach (var bits in new[] { d.AdcBits, d.SampleBits, d.CoefBits, d.ProductBits, d.AccBits, d.OutputBits })
+        {
+            if (bits is < 2 or > 64)
+            {
+                throw new ArgumentException($"width {bits} is outside 2..64", nameof(d));
+            }
+        }
+
+        if (d.AdcBits > 32 || d.Shift is < 0 or > 62 || d.PostMultiplierBits is < 0 or > 63)
+        {
+            throw new ArgumentException("ADC width above 32, shift outside 0..62 or post-multiplier width outside 0..63", nameof(d));
+        }
+
+        var (min, max) = SignedRange(d.CoefBits);
+        if (d.Coefficients.Any(c => c < min || c > max))
+        {
+            throw new ArgumentException($"a coefficient does not fit {d.CoefBits} signed bits", nameof(d));
+        }
+
+        if (d.SampleIndex.Any(i => i < 0 || i >= d.PixelSamples))
+        {
+            throw new ArgumentException("a sample index lies outside the pixel cycle", nameof(d));
+        }
+    }
+}
