@@ -20,7 +20,7 @@ internal static class ArtefactPlan
     /// <summary>Entries to render: explicit formats and template override the file's [[emit]] list.</summary>
     public static IReadOnlyList<(string Template, string OutputPath)> Entries(DesignResult r, IReadOnlyList<string> formats, string? template, string? templateOut)
     {
-        var prefix = TemplateModel.Create(r.Integer, ProvenanceOf(r)).Prefix;
+        var prefix = TemplateModel.Create(r.Datapath, ProvenanceOf(r)).Prefix;
         var list = new List<(string, string)>();
         foreach (var f in formats)
         {
@@ -62,7 +62,7 @@ internal static class ArtefactPlan
             }
         }
 
-        var model = TemplateModel.Create(r.Integer, ProvenanceOf(r));
+        var model = TemplateModel.Create(r.Datapath, ProvenanceOf(r));
         var userBase = Path.GetDirectoryName(Path.GetFullPath(r.Description.SourcePath)) ?? ".";
         var result = ArtefactRenderer.RenderAll(model, entries, ResourceLocator.TemplatesDir, userBase);
         if (!result.Succeeded)

@@ -10,7 +10,7 @@ internal static class FixedPointJson
 {
     public static void Write(Utf8JsonWriter w, DesignResult r)
     {
-        var i = r.Integer;
+        var i = r.Datapath;
         w.WriteStartObject("fixed_point");
         w.WriteString("target", r.FixedPointSettings.TargetName);
         w.WriteString("scheme", DesignText.SchemeWord(r.Chosen.Scheme));

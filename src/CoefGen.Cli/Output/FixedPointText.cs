@@ -9,7 +9,7 @@ internal static class FixedPointText
 {
     public static void Append(StringBuilder sb, DesignResult r)
     {
-        var i = r.Integer;
+        var i = r.Datapath;
         var s = r.FixedPointSettings;
         sb.Append($"Fixed point ({r.ChosenPrediction.Label} on target {s.TargetName})\n");
         sb.Append($"  coefficients {i.Coefficients.Count} x {i.CoefBits} bits, scale P = {i.P}; samples {i.SampleBits} bits ({DesignText.CodingWord(i.Coding)}); products {i.ProductBits} bits; accumulator {i.AccBits} bits, {(i.Accumulator == AccumulatorMode.Wrap ? "wrap-around" : "saturating")}\n");

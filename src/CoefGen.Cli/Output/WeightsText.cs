@@ -11,9 +11,9 @@ internal static class WeightsText
     public static void Append(StringBuilder sb, DesignResult r, bool all)
     {
         var h = r.Chosen.H;
-        var c = r.Integer.Coefficients;
+        var c = r.Datapath.Coefficients;
         var g = r.Grid;
-        sb.Append($"Weights of {r.Chosen.Label} (h: real, unit gain to charge; c: integer, h ~ c / 2^{r.Integer.P})\n");
+        sb.Append($"Weights of {r.Chosen.Label} (h: real, unit gain to charge; c: integer, h ~ c / 2^{r.Datapath.P})\n");
         var table = new TextTable("sample", "t", "s", "h", "c");
         void Row(int k) => table.Add(Eng.Int(g.SampleIndex[k]), Eng.Si(g.TimeS[k], "s"), Eng.Num(g.Step[k], 6), Eng.Num(h[k], 6), Eng.Int(c[k]));
         foreach (var (start, count) in new[] { (0, g.ResetCount), (g.ResetCount, g.SignalCount) })

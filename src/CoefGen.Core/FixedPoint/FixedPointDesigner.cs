@@ -34,7 +34,9 @@ public static class FixedPointDesigner
             throw new ArgumentException("sample width below the ADC bits");
         }
 
-        var powerOfTwo = settings.Normalize == NormalizeMode.Shift && grid.IsSettled;
+        // Shift mode keeps the gain a pure shift even when the signal samples are not fully settled: the
+        // residual settling error then shows up as a (reported) gain error instead of a post-multiplier.
+        var powerOfTwo = settings.Normalize == NormalizeMode.Shift;
         var q = Quantiser.Quantise(h, grid, r, settings.CoefBits, powerOfTwo);
         var c = q.Coefficients;
 
@@ -52,7 +54,7 @@ public static class FixedPointDesigner
         {
             // sum over the signal window is exactly 2^P, so out = acc / 2^(P - F) has gain 2^F per ADU exactly.
             (m, shift) = f <= q.P ? (1L, q.P - f) : (1L << (f - q.P), 0);
-            gainErrorPpm = 0;
+            gainErrorPpm = (gainInt - 1) * 1e6;
         }
         else
         {

@@ -1,11 +1,11 @@
 namespace CoefGen.Core.FixedPoint;
 
-/// <summary>The spellings of the mode enums in TOML files (snake_case).</summary>
+/// <summary>The spellings of the mode enums in TOML files (words joined by hyphens, as in the readout file).</summary>
 public static class ModeNames
 {
     public static IReadOnlyList<string> NormalizeNames { get; } = ["shift", "exact"];
 
-    public static IReadOnlyList<string> RoundingNames { get; } = ["half_up", "half_even", "truncate"];
+    public static IReadOnlyList<string> RoundingNames { get; } = ["half-up", "half-even", "truncate"];
 
     public static IReadOnlyList<string> AccumulatorNames { get; } = ["wrap", "saturate"];
 
@@ -18,8 +18,8 @@ public static class ModeNames
 
     public static RoundingMode? ParseRounding(string text) => text switch
     {
-        "half_up" => RoundingMode.HalfUp,
-        "half_even" => RoundingMode.HalfEven,
+        "half-up" => RoundingMode.HalfUp,
+        "half-even" => RoundingMode.HalfEven,
         "truncate" => RoundingMode.Truncate,
         _ => null,
     };
@@ -35,8 +35,8 @@ public static class ModeNames
 
     public static string Name(RoundingMode m) => m switch
     {
-        RoundingMode.HalfUp => "half_up",
-        RoundingMode.HalfEven => "half_even",
+        RoundingMode.HalfUp => "half-up",
+        RoundingMode.HalfEven => "half-even",
         _ => "truncate",
     };
 

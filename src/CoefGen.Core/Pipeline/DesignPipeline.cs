@@ -32,7 +32,7 @@ public static class DesignPipeline
         var noise = NoiseModel.FromDescription(description);
         var covariance = noise.Sample(grid);
         var solver = OptimalSolverSelection.For(grid.Count);
-        var weights = SolveWeights(description, grid, covariance, solver);
+        var weights = SolveWeights(description, grid, covariance, solver.Solver);
 
         Func<IReadOnlyList<double>, double>? frequencyDomain = grid.Count <= FrequencyCheckLimit
             ? h => FrequencyDomainVariance.ComputeByComponent(noise, grid, h).Sum()
@@ -56,7 +56,7 @@ public static class DesignPipeline
             Predictions = predictions,
             OptimalSolver = solver.Name,
             FixedPointSettings = resolution.Settings,
-            Integer = integer,
+            Datapath = integer,
             Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning)],
         };
     }

@@ -30,7 +30,7 @@ public sealed record DesignResult
     public required FixedPointSettings FixedPointSettings { get; init; }
 
     /// <summary>The integer datapath of the chosen scheme.</summary>
-    public required IntegerDesign Integer { get; init; }
+    public required IntegerDesign Datapath { get; init; }
 
     /// <summary>Warnings from every stage.</summary>
     public required IReadOnlyList<Diagnostic> Warnings { get; init; }
