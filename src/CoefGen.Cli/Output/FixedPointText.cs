@@ -19,6 +19,11 @@ internal static class FixedPointText
         var table = new TextTable("check", "min", "max", "needs", "has", "margin", "");
         foreach (var c in i.Proof.Checks)
         {
+            if (c.Name == "post_multiply" && i.PostMultiplier == 1)
+            {
+                continue; // no post-multiplier is built in shift mode
+            }
+
             var verdict = c.Fits ? "ok" : c.Required ? "DOES NOT FIT" : "exceeds (not needed for this accumulator)";
             table.Add(c.Name.Replace('_', ' '), Eng.Int(c.MinValue), Eng.Int(c.MaxValue), Eng.Int(c.RequiredBits), Eng.Int(c.AvailableBits), (c.MarginBits >= 0 ? "+" : "") + Eng.Int(c.MarginBits), verdict);
         }
