@@ -38,7 +38,7 @@ internal static class TargetsCommand
 
     private static string Text(IReadOnlyList<TargetProfile> profiles)
     {
-        var t = new TextTable("target", "multiplier", "accumulator", "post-mult", "output", "max coefs", "description");
+        var t = new TextTable("target", "multiplier", "accumulator", "post-mult", "output", "max coefs", "description") { LeftAlignLast = true };
         foreach (var p in profiles)
         {
             t.Add(

@@ -9,6 +9,9 @@ internal sealed class TextTable
 
     public TextTable(params string[] header) => _rows.Add(header);
 
+    /// <summary>Left-align the last column too (free text such as descriptions).</summary>
+    public bool LeftAlignLast { get; init; }
+
     public void Add(params string[] cells) => _rows.Add(cells);
 
     public string Render(string indent = "  ")
@@ -30,7 +33,7 @@ internal sealed class TextTable
             for (var c = 0; c < r.Length; c++)
             {
                 var cell = r[c];
-                line.Append(c == 0 ? cell.PadRight(width[c]) : cell.PadLeft(width[c]));
+                line.Append(c == 0 || (LeftAlignLast && c == r.Length - 1) ? cell.PadRight(width[c]) : cell.PadLeft(width[c]));
                 if (c < r.Length - 1)
                 {
                     line.Append("  ");

@@ -17,7 +17,7 @@ public sealed record Diagnostic(Severity Severity, string Code, string Message, 
     public override string ToString()
     {
         var sev = Severity == Severity.Error ? "error" : "warning";
-        var key = Key is null ? "" : $"{Key}: ";
+        var key = string.IsNullOrEmpty(Key) ? "" : $"{Key}: ";
         return $"{Location}: {sev} {Code}: {key}{Message}";
     }
 }
