@@ -1,0 +1,22 @@
+using BenchmarkDotNet.Attributes;
+
+namespace CoefGen.Benchmarks;
+
+/// <summary>Dense null-space solve (baseline) against the structured solver, same problem, same run.</summary>
+[MemoryDiagnoser]
+public class SolverComparison
+{
+    private SolverCase? _case;
+
+    [Params(256, 1024, 4096)]
+    public int PerWindow { get; set; }
+
+    [GlobalSetup]
+    public void Setup() => _case = new SolverCase(PerWindow);
+
+    [Benchmark(Baseline = true)]
+    public double Dense() => _case!.Dense();
+
+    [Benchmark]
+    public double Structured() => _case!.Structured().VarianceV2;
+}
