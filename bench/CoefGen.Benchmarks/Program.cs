@@ -20,13 +20,15 @@ switch (mode)
 {
     case "bench":
         // In-process: no generated child project to build (2-core box, strict repo build settings).
-        // Monitoring, 1 warm-up + 2 measured runs: the dense 2x4096 solve alone takes minutes.
+        // ColdStart with one measured invocation per case (GlobalSetup has already run the JIT): BDN's
+        // other strategies add jitting/warm-up invocations, and the dense 2x4096 solve alone takes minutes.
+        // The MemoryDiagnoser adds one more invocation for the allocation count.
         var job = Job.Default
             .WithToolchain(InProcessEmitToolchain.Instance)
-            .WithStrategy(RunStrategy.Monitoring)
+            .WithStrategy(RunStrategy.ColdStart)
             .WithLaunchCount(1)
-            .WithWarmupCount(1)
-            .WithIterationCount(2)
+            .WithWarmupCount(0)
+            .WithIterationCount(1)
             .WithId("short");
         var config = DefaultConfig.Instance.AddJob(job).WithOptions(ConfigOptions.DisableOptimizationsValidator);
         BenchmarkRunner.Run([typeof(SolverComparison), typeof(LargeStructured)], config);
