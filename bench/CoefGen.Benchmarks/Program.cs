@@ -24,7 +24,7 @@ switch (mode)
         // other strategies add jitting/warm-up invocations, and the dense 2x4096 solve alone takes minutes.
         // The MemoryDiagnoser adds one more invocation for the allocation count.
         var job = Job.Default
-            .WithToolchain(InProcessEmitToolchain.Instance)
+            .WithToolchain(new InProcessEmitToolchain(TimeSpan.FromMinutes(30), logOutput: true))
             .WithStrategy(RunStrategy.ColdStart)
             .WithLaunchCount(1)
             .WithWarmupCount(0)

@@ -4,34 +4,51 @@ namespace CoefGen.Core.Tests.Weights.Structured;
 
 /// <summary>
 /// Row-oriented (left-looking) Cholesky on jagged rows: every inner product runs over two contiguous
-/// row prefixes, vectorised with <see cref="Vector{T}"/>. N³/6 multiply-adds, no blocking: a reference,
-/// not a production path.
+/// row prefixes, vectorised with <see cref="Vector{T}"/>, rows taken in blocks of 16. N³/6 multiply-adds:
+/// a reference, not a production path.
 /// </summary>
 public static class DenseCholesky
 {
+    private const int Block = 16;
+
     /// <summary>Overwrites the lower triangle of a with L (a = LLᵀ); throws if a is not positive definite.</summary>
     public static void FactorInPlace(double[][] a)
     {
         ArgumentNullException.ThrowIfNull(a);
         var n = a.Length;
-        for (var i = 0; i < n; i++)
+        for (var i0 = 0; i0 < n; i0 += Block)
         {
-            var li = a[i];
-            for (var j = 0; j <= i; j++)
+            var i1 = Math.Min(n, i0 + Block);
+            // Columns left of the block: each finished row j is read once for all rows of the block
+            // (cuts memory traffic by the block height; the arithmetic per entry is unchanged).
+            for (var j = 0; j < i0; j++)
             {
-                var sum = li[j] - Dot(li, a[j], j);
-                if (j < i)
+                var lj = a[j];
+                for (var i = i0; i < i1; i++)
                 {
-                    li[j] = sum / a[j][j];
+                    a[i][j] = (a[i][j] - Dot(a[i], lj, j)) / lj[j];
                 }
-                else
-                {
-                    if (!(sum > 0))
-                    {
-                        throw new InvalidOperationException($"matrix is not positive definite (pivot {i} = {sum})");
-                    }
+            }
 
-                    li[i] = Math.Sqrt(sum);
+            for (var i = i0; i < i1; i++)
+            {
+                var li = a[i];
+                for (var j = i0; j <= i; j++)
+                {
+                    var sum = li[j] - Dot(li, a[j], j);
+                    if (j < i)
+                    {
+                        li[j] = sum / a[j][j];
+                    }
+                    else
+                    {
+                        if (!(sum > 0))
+                        {
+                            throw new InvalidOperationException($"matrix is not positive definite (pivot {i} = {sum})");
+                        }
+
+                        li[i] = Math.Sqrt(sum);
+                    }
                 }
             }
         }
