@@ -68,6 +68,26 @@ public sealed class SampledCovariance
     /// <summary>h^T R h with the digital diagonal.</summary>
     public double QuadraticForm(IReadOnlyList<double> h) => QuadraticForm(h, TotalLag) + DigitalPart(h);
 
+    /// <summary>h^T C_c h for every analog component, in order, from one pass over the weights.</summary>
+    public double[] ComponentQuadraticForms(IReadOnlyList<double> h)
+    {
+        var a = LagProducts(h);
+        var result = new double[Components.Count];
+        for (var c = 0; c < result.Length; c++)
+        {
+            var lag = Components[c].Lag;
+            var total = 0.0;
+            for (var k = 0; k < a.Length; k++)
+            {
+                total += lag[k] * a[k];
+            }
+
+            result[c] = total;
+        }
+
+        return result;
+    }
+
     /// <summary>h^T C_c h for one analog component.</summary>
     public double ComponentQuadraticForm(IReadOnlyList<double> h, int component) => QuadraticForm(h, Components[component].Lag);
 
@@ -86,24 +106,45 @@ public sealed class SampledCovariance
 
     private double QuadraticForm(IReadOnlyList<double> h, IReadOnlyList<double> lag)
     {
+        var a = LagProducts(h);
+        var total = 0.0;
+        for (var k = 0; k < a.Length; k++)
+        {
+            total += lag[k] * a[k];
+        }
+
+        return total;
+    }
+
+    /// <summary>
+    /// a[k] = sum of h_i h_j over ordered pairs with |n_i - n_j| = k (a[0] = sum h^2), so that
+    /// h^T C h = sum_k Lag[k] a[k]: one O(N^2) pass over plain arrays per weight vector, then O(span) per component.
+    /// </summary>
+    private double[] LagProducts(IReadOnlyList<double> h)
+    {
         ArgumentNullException.ThrowIfNull(h);
         if (h.Count != Count)
         {
             throw new ArgumentException($"weight vector has {h.Count} entries, covariance {Count}");
         }
 
-        var total = 0.0;
-        for (var i = 0; i < Count; i++)
+        ReadOnlySpan<double> w = h as double[] ?? [.. h];
+        ReadOnlySpan<int> index = _index;
+        var a = new double[TotalLag.Length];
+        unchecked
         {
-            var row = lag[0] * h[i];
-            for (var j = i + 1; j < Count; j++)
+            for (var i = 0; i < w.Length; i++)
             {
-                row += 2 * lag[_index[j] - _index[i]] * h[j];
+                var hi2 = 2 * w[i];
+                var ni = index[i];
+                a[0] += w[i] * w[i];
+                for (var j = i + 1; j < w.Length; j++)
+                {
+                    a[index[j] - ni] += hi2 * w[j];
+                }
             }
-
-            total += h[i] * row;
         }
 
-        return total;
+        return a;
     }
 }

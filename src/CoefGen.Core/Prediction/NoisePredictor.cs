@@ -42,9 +42,10 @@ public static class NoisePredictor
 
         var lsb2 = adc.LsbV * adc.LsbV;
         var parts = new List<(string Source, double Variance)>();
+        var perComponent = r.ComponentQuadraticForms(h);
         for (var c = 0; c < r.Components.Count; c++)
         {
-            parts.Add((r.Components[c].Name, r.ComponentQuadraticForm(h, c)));
+            parts.Add((r.Components[c].Name, perComponent[c]));
         }
 
         parts.Add(("quantisation", lsb2 / 12.0 * sumSq));
@@ -58,7 +59,7 @@ public static class NoisePredictor
             .Select(p => new NoiseBudgetEntry(p.Source, p.Variance, budgetTotal > 0 ? p.Variance / budgetTotal : 0))
             .ToArray();
 
-        var variance = r.QuadraticForm(h);
+        var variance = perComponent.Sum() + r.DigitalPart(h);
         var sigma = Math.Sqrt(Math.Max(0, variance));
         double? fd = null;
         double? agreement = null;
