@@ -48,6 +48,12 @@ public sealed class DesignPoint
             diagnostics = [.. ex.Diagnostics.Where(d => d.Severity == Severity.Error)];
             return null;
         }
+        catch (ArgumentException ex)
+        {
+            // A valid file the stages still cannot design (e.g. a one-sample Hann window has no weight): a row, not a crash.
+            diagnostics = [Diagnostic.Error("CG4002", SourceLocation.FileOnly(_sourcePath), $"the design stages reject this point: {ex.Message}")];
+            return null;
+        }
     }
 
     /// <summary>The summary of one point (invalid points carry their diagnostics).</summary>

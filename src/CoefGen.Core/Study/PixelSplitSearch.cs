@@ -30,7 +30,7 @@ public static class PixelSplitSearch
 
         var trials = new Dictionary<(int, int), WindowTrial>();
         WindowLayout LayoutFor(int r, int s) =>
-            layout with { ResetCount = r, SignalCount = s, DeadSamples = pixel - layout.TailSamples - s - (layout.LeadSamples + r + layout.TransferGapSamples) };
+            layout with { ResetCount = r, SignalCount = s, DeadSamples = Math.Round(pixel - layout.TailSamples - s - (layout.LeadSamples + r + layout.TransferGapSamples), 9) };
         bool Fits(int r, int s) => r >= 1 && s >= 1 && r + s <= room;
 
         void Evaluate(IEnumerable<(int R, int S)> candidates)

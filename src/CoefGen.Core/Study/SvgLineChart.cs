@@ -30,17 +30,18 @@ public sealed class SvgLineChart
     public string Render()
     {
         var points = Series.Select(s => Usable(s).ToList()).ToList();
-        var all = points.SelectMany(p => p).ToList();
+        var all = points.SelectMany(p => p).Where(p => !double.IsNaN(p.X)).ToList();
         var (x0, x1) = Extent(all.Select(p => p.X), XLog);
         var (y0, y1) = Extent(all.Select(p => p.Y), YLog);
         var pw = Width - Left - Right;
-        var ph = Height - Top - Bottom - (14 * Series.Count);
+        var ph = Height - Top - Bottom;
+        var fullHeight = Height + (14 * Series.Count);
         double Px(double x) => Left + (pw * Frac(x, x0, x1, XLog));
         double Py(double y) => Top + ph - (ph * Frac(y, y0, y1, YLog));
 
         var sb = new StringBuilder();
-        sb.Append($"<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{C(Width)}\" height=\"{C(Height)}\" viewBox=\"0 0 {C(Width)} {C(Height)}\" font-family=\"sans-serif\" font-size=\"12\">\n");
-        sb.Append($"<rect width=\"{C(Width)}\" height=\"{C(Height)}\" fill=\"#ffffff\"/>\n");
+        sb.Append($"<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{C(Width)}\" height=\"{C(fullHeight)}\" viewBox=\"0 0 {C(Width)} {C(fullHeight)}\" font-family=\"sans-serif\" font-size=\"12\">\n");
+        sb.Append($"<rect width=\"{C(Width)}\" height=\"{C(fullHeight)}\" fill=\"#ffffff\"/>\n");
         sb.Append($"<text x=\"{C(Width / 2)}\" y=\"20\" text-anchor=\"middle\" font-size=\"14\">{Esc(Title)}</text>\n");
         foreach (var t in Ticks(x0, x1, XLog))
         {
@@ -66,6 +67,12 @@ public sealed class SvgLineChart
             var first = true;
             foreach (var (x, y) in points[i])
             {
+                if (double.IsNaN(x))
+                {
+                    first = true;
+                    continue;
+                }
+
                 if (Series[i].Steps && !first)
                 {
                     path.Append($" H{C(Px(x))}");
@@ -82,13 +89,13 @@ public sealed class SvgLineChart
 
             if (points[i].Count is > 0 and <= 60 && !Series[i].Steps)
             {
-                foreach (var (x, y) in points[i])
+                foreach (var (x, y) in points[i].Where(p => !double.IsNaN(p.X)))
                 {
                     sb.Append($"<circle cx=\"{C(Px(x))}\" cy=\"{C(Py(y))}\" r=\"2.5\" fill=\"{colour}\"/>\n");
                 }
             }
 
-            var ly = Height - Bottom + 30 + (14 * i);
+            var ly = Height + 4 + (14 * i);
             sb.Append($"<line x1=\"{C(Left)}\" y1=\"{C(ly - 4)}\" x2=\"{C(Left + 24)}\" y2=\"{C(ly - 4)}\" stroke=\"{colour}\" stroke-width=\"3\"/>\n");
             sb.Append($"<text x=\"{C(Left + 30)}\" y=\"{C(ly)}\">{Esc(Series[i].Name)}</text>\n");
         }
@@ -113,6 +120,10 @@ public sealed class SvgLineChart
             if (double.IsFinite(x) && double.IsFinite(y) && (!XLog || x > 0) && (!YLog || y > 0))
             {
                 yield return (x, y);
+            }
+            else if (double.IsNaN(x))
+            {
+                yield return (double.NaN, double.NaN); // a break in the line
             }
         }
     }

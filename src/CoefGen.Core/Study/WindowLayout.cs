@@ -28,7 +28,7 @@ public sealed record WindowLayout(int LeadSamples, int ResetCount, double Transf
         var t = d.Timing;
         var transfer = t.TransferTimeS * d.Adc.RateHz;
         return new WindowLayout(
-            t.Reset.Start, t.Reset.Count, transfer - t.Reset.End, t.Signal.Start - transfer, t.Signal.Count, t.PixelSamples - t.Signal.End);
+            t.Reset.Start, t.Reset.Count, Math.Round(transfer - t.Reset.End, 9), Math.Round(t.Signal.Start - transfer, 9), t.Signal.Count, t.PixelSamples - t.Signal.End);
     }
 
     /// <summary>The readout text with this layout's timing written in samples (ns keys are replaced).</summary>
