@@ -14,6 +14,8 @@ internal static class CliApp
             EmitCommand.Create(output, error),
             CheckCommand.Create(output, error),
             TargetsCommand.Create(output, error),
+            SweepCommand.Create(output, error),
+            ReportCommand.Create(output, error),
         };
 
     public static int Run(string[] args, TextWriter output, TextWriter error)

@@ -1,0 +1,68 @@
+using System.CommandLine;
+using System.Security.Cryptography;
+using CoefGen.Cli.Io;
+using CoefGen.Cli.Output;
+using CoefGen.Core.Study;
+
+namespace CoefGen.Cli.Commands;
+
+/// <summary>`coefgen report FILE --out DIR`: the design as an HTML page and a Markdown page with SVG charts.</summary>
+internal static class ReportCommand
+{
+    public static Command Create(TextWriter output, TextWriter error)
+    {
+        var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML)." };
+        var outDir = new Option<DirectoryInfo>("--out", "-o") { Description = "Folder for report.html, report.md and the Markdown's charts.", Required = true };
+        var cmd = new Command(
+            "report",
+            "Write the design report: the description as understood, weights against time, |H(f)|^2 over the noise PSD, the noise " +
+            "budget, the fixed-point proof with margins and the emitted files with their SHA-256. report.html is self-contained " +
+            "(inline SVG, no external resources); report.md links report-chart-N.svg. Every number is the one `design --json` prints. Exit 2 on bad input.")
+        {
+            file, outDir,
+        };
+        cmd.SetAction(parse =>
+        {
+            var path = parse.GetRequiredValue(file).ToString();
+            var result = DesignRunner.TryRun(path, error);
+            if (result is null)
+            {
+                return ExitCodes.BadInput;
+            }
+
+            var emitted = new List<EmittedFile>();
+            var entries = result.Description.Emit.Select(e => (e.Template, e.Path)).ToList();
+            if (entries.Count > 0)
+            {
+                var artefacts = ArtefactPlan.Render(result, entries, error);
+                if (artefacts is null)
+                {
+                    return ExitCodes.BadInput;
+                }
+
+                for (var i = 0; i < artefacts.Count; i++)
+                {
+                    var bytes = artefacts[i].ToBytes();
+                    emitted.Add(new EmittedFile(entries[i].Template, artefacts[i].RelativePath, bytes.Length, Convert.ToHexStringLower(SHA256.HashData(bytes))));
+                }
+            }
+
+            var sections = DesignReport.Build(result, emitted);
+            var title = $"Design report: {result.Description.Name}";
+            var charts = new List<(string Name, string Svg)>();
+            var markdown = ReportMarkdown.Render(title, sections, charts);
+            var html = ReportHtml.Render(title, sections);
+            var dir = parse.GetRequiredValue(outDir).FullName;
+            foreach (var (name, svg) in charts)
+            {
+                AtomicFile.WriteAllText(Path.Combine(dir, name), svg);
+            }
+
+            AtomicFile.WriteAllText(Path.Combine(dir, "report.md"), markdown);
+            AtomicFile.WriteAllText(Path.Combine(dir, "report.html"), html);
+            output.WriteLine($"wrote {Path.Combine(dir, "report.html")} and report.md with {charts.Count} charts");
+            return ExitCodes.Ok;
+        });
+        return cmd;
+    }
+}

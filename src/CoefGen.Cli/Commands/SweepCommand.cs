@@ -1,0 +1,187 @@
+using System.CommandLine;
+using System.Globalization;
+using System.Text;
+using CoefGen.Cli.Io;
+using CoefGen.Cli.Output;
+using CoefGen.Core.Diagnostics;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Study;
+
+namespace CoefGen.Cli.Commands;
+
+/// <summary>`coefgen sweep FILE --vary KEY=VALUES ... | --target-noise-e X | --split-pixel-time`: trade studies.</summary>
+internal static class SweepCommand
+{
+    public static Command Create(TextWriter output, TextWriter error)
+    {
+        var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML) the study starts from." };
+        var vary = new Option<string[]>("--vary")
+        {
+            Description = "KEY=LIST (a,b,c), KEY=START:STOP:STEP or KEY=START:STOP:xFACTOR; KEY is a dotted path such as adc.rate_hz, " +
+                          "timing.signal.count or noise.source[0].flicker_corner_hz. Numbers may end in an SI prefix (20M). Repeat for a grid.",
+        };
+        var csv = new Option<FileInfo?>("--csv") { Description = "Also write the sweep as CSV to this path." };
+        var plot = new Option<FileInfo?>("--plot") { Description = "Also write an SVG plot of read noise against the first varied key." };
+        var json = new Option<bool>("--json") { Description = "Print JSON (schema coefgen.sweep/1) instead of tables." };
+        var target = new Option<double?>("--target-noise-e") { Description = "Find the smallest equal reset/signal window count (in samples) whose read noise meets this many e- rms." };
+        var split = new Option<bool>("--split-pixel-time") { Description = "For the file's pixel cycle, find the split between reset window, dead time and signal window with the lowest read noise." };
+        var scheme = new Option<string?>("--scheme") { Description = "Scheme the searches optimise: boxcar, weighted or optimal (default: the file's weights.scheme)." };
+        var cmd = new Command(
+            "sweep",
+            "Design the readout at many points: vary numeric keys over a grid and tabulate the read noise of every scheme and the " +
+            "integer design's status, or answer 'how short can the windows be for a target noise' and 'how should a fixed pixel time " +
+            "be split'. Every point is the readout file with the varied keys rewritten, validated like a user file; an invalid point " +
+            "shows its diagnostic in its row. Exit 2 on bad options or a bad readout file.")
+        {
+            file, vary, csv, plot, json, target, split, scheme,
+        };
+        cmd.SetAction(parse => Run(
+            parse.GetRequiredValue(file).ToString(), parse.GetValue(vary) ?? [], parse.GetValue(csv)?.ToString(), parse.GetValue(plot)?.ToString(),
+            parse.GetValue(json), parse.GetValue(target), parse.GetValue(split), parse.GetValue(scheme), output, error));
+        return cmd;
+    }
+
+    private static int Run(string path, string[] vary, string? csvPath, string? plotPath, bool json, double? target, bool split, string? schemeWord, TextWriter output, TextWriter error)
+    {
+        if (vary.Length == 0 && target is null && !split)
+        {
+            error.WriteLine("error: give --vary KEY=VALUES, --target-noise-e X or --split-pixel-time (see coefgen sweep --help)");
+            return ExitCodes.BadInput;
+        }
+
+        var axes = new List<SweepAxis>();
+        foreach (var spec in vary)
+        {
+            var axis = SweepAxis.TryParse(spec, out var problem);
+            if (axis is null)
+            {
+                error.WriteLine($"error: --vary {problem}");
+                return ExitCodes.BadInput;
+            }
+
+            axes.Add(axis);
+        }
+
+        if (axes.Aggregate(1L, (n, a) => n * a.Values.Count) > Sweep.MaxPoints)
+        {
+            error.WriteLine($"error: the grid has more than {Sweep.MaxPoints.ToString(CultureInfo.InvariantCulture)} points; use fewer values");
+            return ExitCodes.BadInput;
+        }
+
+        if ((csvPath is not null || plotPath is not null) && axes.Count == 0)
+        {
+            error.WriteLine("error: --csv and --plot need at least one --vary");
+            return ExitCodes.BadInput;
+        }
+
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG0002", SourceLocation.FileOnly(path), "cannot read the readout file: " + ex.Message)]);
+            return ExitCodes.BadInput;
+        }
+
+        var text = new UTF8Encoding(false).GetString(bytes);
+        var point = PointFor(path);
+        ReadoutDescription? baseline = null;
+        WeightScheme? chosen = null;
+        if (target is not null || split)
+        {
+            var baseResult = DesignRunner.TryRun(path, error);
+            if (baseResult is null)
+            {
+                return ExitCodes.BadInput;
+            }
+
+            baseline = baseResult.Description;
+            chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
+            if (chosen is null)
+            {
+                error.WriteLine($"error: --scheme '{schemeWord}': expected boxcar, weighted or optimal");
+                return ExitCodes.BadInput;
+            }
+
+            if (target is double t && !(t > 0 && double.IsFinite(t)))
+            {
+                error.WriteLine("error: --target-noise-e must be a positive number of electrons");
+                return ExitCodes.BadInput;
+            }
+        }
+
+        SweepResult? sweep = null;
+        if (axes.Count > 0)
+        {
+            var total = (int)axes.Aggregate(1L, (n, a) => n * a.Values.Count);
+            var bar = ReferenceEquals(error, Console.Error) && !Console.IsErrorRedirected ? new SweepProgress(error, total) : null;
+            sweep = Sweep.Run(text, point, axes, progress: bar is null ? null : bar.Report);
+            bar?.Finish();
+        }
+
+        var targetResult = target is double x ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
+        var splitResult = split ? PixelSplitSearch.Run(text, baseline!, point, chosen!.Value) : null;
+        if (sweep is not null && csvPath is not null)
+        {
+            AtomicFile.WriteAllText(csvPath, SweepCsv.Render(sweep));
+        }
+
+        if (sweep is not null && plotPath is not null)
+        {
+            AtomicFile.WriteAllText(plotPath, SweepPlot.Render(sweep));
+        }
+
+        if (json)
+        {
+            output.Write(SweepJson.Render(sweep, targetResult, splitResult));
+            return ExitCodes.Ok;
+        }
+
+        var parts = new List<string>();
+        if (sweep is not null)
+        {
+            parts.Add(SweepText.Render(sweep));
+        }
+
+        if (targetResult is not null)
+        {
+            parts.Add(SweepSearchText.Target(targetResult, baseline!.Adc.RateHz));
+        }
+
+        if (splitResult is not null)
+        {
+            parts.Add(SweepSearchText.Split(splitResult, baseline!.Adc.RateHz));
+        }
+
+        output.Write(string.Join("\n", parts));
+        return ExitCodes.Ok;
+    }
+
+    private static WeightScheme? ParseScheme(string word) => word switch
+    {
+        "boxcar" => WeightScheme.Boxcar,
+        "weighted" => WeightScheme.Weighted,
+        "optimal" => WeightScheme.Optimal,
+        _ => null,
+    };
+
+    private static DesignPoint PointFor(string readoutPath)
+    {
+        var baseDir = Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";
+        return new DesignPoint(readoutPath, relative => ReadRelative(baseDir, relative), InputFiles.LoadTargets());
+    }
+
+    private static byte[]? ReadRelative(string baseDir, string relative)
+    {
+        try
+        {
+            return File.ReadAllBytes(Path.Combine(baseDir, relative));
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
+        {
+            return null;
+        }
+    }
+}

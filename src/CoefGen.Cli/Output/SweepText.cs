@@ -1,0 +1,59 @@
+using System.Text;
+using CoefGen.Core.Study;
+
+namespace CoefGen.Cli.Output;
+
+/// <summary>The sweep as a terminal table: one row per point, the diagnostic in the row of an invalid point.</summary>
+internal static class SweepText
+{
+    public static string Render(SweepResult r)
+    {
+        var schemes = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid)?.Schemes.Select(s => s.Scheme).ToList() ?? [];
+        var header = new List<string>();
+        header.AddRange(r.Axes.Select(a => a.Key));
+        foreach (var s in schemes)
+        {
+            header.Add($"{DesignText.SchemeWord(s)} e-");
+            header.Add($"{DesignText.SchemeWord(s)} ADU");
+        }
+
+        header.AddRange(["integer design", "gain err ppm", "penalty %"]);
+        var table = new TextTable([.. header]);
+        var problems = new StringBuilder();
+        foreach (var p in r.Points)
+        {
+            var row = p.Values.Select(v => v.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)).ToList();
+            var o = p.Outcome;
+            if (!o.Valid)
+            {
+                var first = o.Diagnostics.Count > 0 ? o.Diagnostics[0] : null;
+                row.Add("invalid: " + (first is null ? "no design" : $"{first.Code} {first.Message}"));
+                problems.Append($"  point {Eng.Int(p.Index)}: {string.Join("; ", o.Diagnostics.Select(d => d.ToString()))}\n");
+                table.Add([.. row]);
+                continue;
+            }
+
+            foreach (var s in o.Schemes)
+            {
+                row.Add(Eng.Num(s.NoiseElectrons, 4));
+                row.Add(Eng.Num(s.NoiseAdu, 4));
+            }
+
+            row.Add($"{DesignText.SchemeWord(o.Chosen)} {(o.Safe ? "safe" : "NOT SAFE")}");
+            row.Add(Eng.Num(o.GainErrorPpm, 3));
+            row.Add(Eng.Num(o.NoisePenaltyPercent, 3));
+            table.Add([.. row]);
+        }
+
+        var valid = r.Points.Count(p => p.Outcome.Valid);
+        var sb = new StringBuilder();
+        sb.Append($"sweep: {Eng.Int(r.Points.Count)} points, {Eng.Int(valid)} valid; read noise rms per scheme (e- at the sense node, ADU at the ADC)\n");
+        sb.Append(table.Render());
+        if (problems.Length > 0)
+        {
+            sb.Append("\ninvalid points:\n").Append(problems);
+        }
+
+        return sb.ToString();
+    }
+}

@@ -1,0 +1,60 @@
+using CoefGen.Core.Readout;
+
+namespace CoefGen.Core.Study;
+
+/// <summary>
+/// The pixel cycle in samples, as the window searches move it: a lead-in before the reset window, the reset
+/// window, a gap to the charge transfer, the dead time (settling) from the transfer to the signal window, the
+/// signal window, and a tail to the end of the cycle. Written back to the readout text in samples.
+/// </summary>
+/// <param name="LeadSamples">Reset window start.</param>
+/// <param name="ResetCount">Reset window length.</param>
+/// <param name="TransferGapSamples">From the end of the reset window to the transfer (may be fractional).</param>
+/// <param name="DeadSamples">From the transfer to the start of the signal window (may be fractional).</param>
+/// <param name="SignalCount">Signal window length.</param>
+/// <param name="TailSamples">From the end of the signal window to the end of the cycle.</param>
+public sealed record WindowLayout(int LeadSamples, int ResetCount, double TransferGapSamples, double DeadSamples, int SignalCount, int TailSamples)
+{
+    public double TransferSample => LeadSamples + ResetCount + TransferGapSamples;
+
+    public int SignalStart => (int)Math.Round(TransferSample + DeadSamples);
+
+    public int PixelSamples => SignalStart + SignalCount + TailSamples;
+
+    /// <summary>The layout of a loaded description.</summary>
+    public static WindowLayout Of(ReadoutDescription d)
+    {
+        ArgumentNullException.ThrowIfNull(d);
+        var t = d.Timing;
+        var transfer = t.TransferTimeS * d.Adc.RateHz;
+        return new WindowLayout(
+            t.Reset.Start, t.Reset.Count, Math.Round(transfer - t.Reset.End, 9), Math.Round(t.Signal.Start - transfer, 9), t.Signal.Count, t.PixelSamples - t.Signal.End);
+    }
+
+    /// <summary>The readout text with this layout's timing written in samples (ns keys are replaced).</summary>
+    public string? Apply(string text, out string? error)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        var edits = new (string Key, double Value)[]
+        {
+            ("timing.pixel_samples", PixelSamples),
+            ("timing.transfer_sample", TransferSample),
+            ("timing.reset.start", LeadSamples),
+            ("timing.reset.count", ResetCount),
+            ("timing.signal.start", SignalStart),
+            ("timing.signal.count", SignalCount),
+        };
+        string? edited = text;
+        error = null;
+        foreach (var (key, value) in edits)
+        {
+            edited = ReadoutTextEditor.SetNumber(edited, key, value, out error);
+            if (edited is null)
+            {
+                return null;
+            }
+        }
+
+        return edited;
+    }
+}
