@@ -29,6 +29,12 @@ public static class DesignPipeline
         }
 
         var grid = SampleGrid.FromDescription(description);
+        var infeasible = DesignFeasibility.Check(description, grid);
+        if (infeasible.Count > 0)
+        {
+            throw new InputException(infeasible);
+        }
+
         var noise = NoiseModel.FromDescription(description);
         var covariance = noise.Sample(grid);
         var solver = OptimalSolverSelection.For(grid.Count);

@@ -1,0 +1,44 @@
+using CoefGen.Core.Diagnostics;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Weights;
+
+namespace CoefGen.Core.Pipeline;
+
+/// <summary>
+/// Checks that the constraints can be met on this sample grid before any weights are solved, so a file the
+/// loader accepted but that cannot give a charge estimate is a located error, not an exception.
+/// </summary>
+internal static class DesignFeasibility
+{
+    public static IReadOnlyList<Diagnostic> Check(ReadoutDescription d, SampleGrid grid)
+    {
+        var bag = new DiagnosticBag();
+        var meanReset = 0.0;
+        var meanSignal = 0.0;
+        for (var i = 0; i < grid.Count; i++)
+        {
+            if (grid.IsSignal(i))
+            {
+                meanSignal += grid.Step[i] / grid.SignalCount;
+            }
+            else
+            {
+                meanReset += grid.Step[i] / grid.ResetCount;
+            }
+        }
+
+        if (!(Math.Abs(meanSignal - meanReset) > 1e-9))
+        {
+            bag.Error("CG1206", d.LocationOf("timing.signal.start"),
+                "no signal-window sample sees the charge step (every sample lies at or before the transfer instant); start the signal window after timing.transfer_*");
+        }
+
+        if (d.Weights.RejectDrift && (grid.ResetCount < 2 || grid.SignalCount < 2))
+        {
+            bag.Error("CG1404", d.LocationOf("weights.reject_drift"),
+                "drift rejection needs at least 2 samples in each window (offset, gain and slope are three constraints); lengthen the windows or set reject_drift = false");
+        }
+
+        return bag.Items;
+    }
+}
