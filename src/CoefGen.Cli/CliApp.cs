@@ -15,6 +15,7 @@ internal static class CliApp
             CheckCommand.Create(output, error),
             TargetsCommand.Create(output, error),
             VectorsCommand.Create(output, error),
+            VerifyCommand.Create(output, error),
         };
 
     public static int Run(string[] args, TextWriter output, TextWriter error)
