@@ -7,8 +7,8 @@ namespace CoefGen.Core.Vectors;
 /// Draws analog noise at the weighted samples with exactly the model's covariance: the lower Cholesky factor L
 /// of the TRUE covariance (the sampled lag tables with each component's removed constant C(0) added back, which
 /// makes the matrix positive semi-definite), so n = L z with z standard normal has E[n n^T] = L L^T = C.
-/// When roundoff leaves a pivot non-positive, a diagonal load of 1e-12 x the largest variance is added (and
-/// reported); that changes the variance of any weighted sum by a relative 1e-12 at most.
+/// When roundoff leaves a pivot non-positive, a diagonal load times the largest variance is added (and
+/// reported), starting at 1e-12 and growing tenfold up to 1e-5: the variance of a weighted sum then changes by that relative amount at most.
 /// </summary>
 public sealed class CorrelatedNoiseSampler
 {
