@@ -16,6 +16,8 @@ internal static class CliApp
             TargetsCommand.Create(output, error),
             SweepCommand.Create(output, error),
             ReportCommand.Create(output, error),
+            VectorsCommand.Create(output, error),
+            VerifyCommand.Create(output, error),
         };
 
     public static int Run(string[] args, TextWriter output, TextWriter error)

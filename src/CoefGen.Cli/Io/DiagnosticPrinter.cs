@@ -17,7 +17,7 @@ internal static class DiagnosticPrinter
     {
         Print(error, diagnostics);
         var errors = diagnostics.Count(d => d.Severity == Severity.Error);
-        error.WriteLine(errors == 1 ? "1 error; nothing was written." : $"{errors} errors; nothing was written.");
+        error.WriteLine(errors == 1 ? "1 error." : $"{errors} errors.");
         return ExitCodes.BadInput;
     }
 }

@@ -51,7 +51,7 @@ public sealed class DesignPoint
         catch (ArgumentException ex)
         {
             // A valid file the stages still cannot design (e.g. a one-sample Hann window has no weight): a row, not a crash.
-            diagnostics = [Diagnostic.Error("CG4002", SourceLocation.FileOnly(_sourcePath), $"the design stages reject this point: {ex.Message}")];
+            diagnostics = [Diagnostic.Error("CG6002", SourceLocation.FileOnly(_sourcePath), $"the design stages reject this point: {ex.Message}")];
             return null;
         }
     }

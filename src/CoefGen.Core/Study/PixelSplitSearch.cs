@@ -42,7 +42,7 @@ public static class PixelSplitSearch
                 var l = LayoutFor(todo[i].R, todo[i].S);
                 var text = l.Apply(baseText, out var error);
                 results[i] = new WindowTrial(l, text is null
-                    ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG4001", Diagnostics.SourceLocation.FileOnly(baseline.SourcePath), error ?? "cannot edit the timing")])
+                    ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG6001", Diagnostics.SourceLocation.FileOnly(baseline.SourcePath), error ?? "cannot edit the timing")])
                     : point.Evaluate(text));
             });
             for (var i = 0; i < todo.Length; i++)

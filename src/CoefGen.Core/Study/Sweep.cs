@@ -65,7 +65,7 @@ public static class Sweep
     {
         var text = PointText(baseText, axes, values, out var error);
         return text is null
-            ? PointOutcome.Invalid([Diagnostic.Error("CG4001", SourceLocation.FileOnly(""), error ?? "cannot edit the key")])
+            ? PointOutcome.Invalid([Diagnostic.Error("CG6001", SourceLocation.FileOnly(""), error ?? "cannot edit the key")])
             : point.Evaluate(text);
     }
 

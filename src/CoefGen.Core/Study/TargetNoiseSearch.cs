@@ -33,7 +33,7 @@ public static class TargetNoiseSearch
                 var l = layout with { ResetCount = n, SignalCount = n };
                 var text = l.Apply(baseText, out var error);
                 var outcome = text is null
-                    ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG4001", Diagnostics.SourceLocation.FileOnly(baseline.SourcePath), error ?? "cannot edit the timing")])
+                    ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG6001", Diagnostics.SourceLocation.FileOnly(baseline.SourcePath), error ?? "cannot edit the timing")])
                     : point.Evaluate(text);
                 t = new WindowTrial(l, outcome);
                 trials[n] = t;

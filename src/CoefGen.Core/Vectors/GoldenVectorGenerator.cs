@@ -1,0 +1,124 @@
+using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Pipeline;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Weights;
+
+namespace CoefGen.Core.Vectors;
+
+/// <summary>
+/// Builds golden stimulus for an integer design and its expected results from <see cref="BitExactModel"/>.
+/// Each pixel cycle is x_k = baseline + q s_k + n_k at the ADC input, quantised as an ideal mid-tread ADC
+/// (nearest code, ties up), clipped to the rails and written in the readout's coding. n_k is drawn at the
+/// weighted samples with the model's analog covariance (<see cref="CorrelatedNoiseSampler"/>) plus the ADC's
+/// own white noise, both before quantisation, so quantisation itself supplies the LSB^2/12 term. Samples
+/// outside the windows carry the noise-free level. The edge cases come first, then a repeating ladder of ten
+/// pixels: eight of zero charge (noise), one mid-scale and one full-scale charge.
+/// </summary>
+public static class GoldenVectorGenerator
+{
+    /// <summary>Fraction of the ADC span between the bottom rail and the baseline (DC offset), plus a fractional part.</summary>
+    public const double BaselineSpanFraction = 0.125;
+
+    public const double BaselineFractionAdu = 0.3125;
+
+    /// <summary>Generates for the chosen scheme's datapath of <paramref name="result"/>.</summary>
+    public static GoldenVectorSet Generate(DesignResult result, VectorOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return Generate(result, result.Datapath, options);
+    }
+
+    /// <summary>Generates for any integer design of the same readout (e.g. the boxcar one, for comparisons).</summary>
+    public static GoldenVectorSet Generate(DesignResult result, IntegerDesign design, VectorOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(design);
+        ArgumentNullException.ThrowIfNull(options);
+        ArgumentOutOfRangeException.ThrowIfLessThan(options.Pixels, 1);
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(options.Pixels, VectorOptions.MaxPixels);
+        var d = result.Description;
+        if (!design.SampleIndex.SequenceEqual(result.Covariance.SampleIndex) || design.PixelSamples != d.Timing.PixelSamples)
+        {
+            throw new ArgumentException("the design's samples are not the readout's weighted samples", nameof(design));
+        }
+
+        var adc = d.Adc;
+        var span = Math.Pow(2, adc.Bits);
+        var baseline = adc.MinCode + (BaselineSpanFraction * span) + BaselineFractionAdu;
+        var fullCharge = adc.MaxCode - baseline;
+        var step = CycleStep(d);
+        var sampler = CorrelatedNoiseSampler.Create(result.Covariance, result.Noise);
+        var rng = new Xoshiro256StarStar(options.Seed);
+        var shape = new CycleShape(design, adc, baseline, step);
+
+        var stimuli = EdgeCases(shape).ToList();
+        var noise = new double[sampler.Count];
+        for (var j = 0; stimuli.Count < options.Pixels; j++)
+        {
+            var (kind, charge) = (j % 10) switch
+            {
+                4 => (PixelKind.ChargeMid, fullCharge / 2),
+                9 => (PixelKind.ChargeFull, fullCharge),
+                _ => (PixelKind.Noise, 0.0),
+            };
+            sampler.Sample(rng, noise);
+            stimuli.Add((kind, charge, shape.Noisy(charge, noise, rng)));
+        }
+
+        var pixels = stimuli.Take(options.Pixels)
+            .Select(s => new GoldenPixel(s.Kind, s.Charge, s.Codes, BitExactModel.RunCycle(design, s.Codes)))
+            .ToArray();
+        return new GoldenVectorSet
+        {
+            Design = design,
+            Seed = options.Seed,
+            ReadoutFileName = Path.GetFileName(d.SourcePath),
+            ReadoutSha256 = d.ContentSha256,
+            BaselineAdu = baseline,
+            FullScaleChargeAdu = fullCharge,
+            AduPerElectron = d.Sensor.VoltsAtAdcPerElectron / adc.LsbV,
+            AddedConstantV2 = sampler.AddedConstantV2,
+            DiagonalLoadingV2 = sampler.DiagonalLoadingV2,
+            Pixels = pixels,
+        };
+    }
+
+    /// <summary>The step response s_k at every sample of the cycle, by the same formula as the weights' grid.</summary>
+    private static IReadOnlyList<double> CycleStep(ReadoutDescription d)
+    {
+        var t = d.Timing;
+        if (t.PixelSamples < 2)
+        {
+            return [0.0];
+        }
+
+        double? pole = t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null;
+        return SampleGrid.Create(d.Adc.RateHz, new SampleWindow(0, 1), new SampleWindow(1, t.PixelSamples - 1), t.TransferTimeS, pole).Step;
+    }
+
+    private static IEnumerable<(string Kind, double Charge, long[] Codes)> EdgeCases(CycleShape s)
+    {
+        yield return (PixelKind.DcOffset, 0.0, s.Clean(0.0));
+        yield return (PixelKind.RailsLow, 0.0, s.Fill(_ => s.Low));
+        yield return (PixelKind.RailsHigh, 0.0, s.Fill(_ => s.High));
+        yield return (PixelKind.ResetLowSignalHigh, 0.0, s.Windows(s.Low, s.High));
+        yield return (PixelKind.ResetHighSignalLow, 0.0, s.Windows(s.High, s.Low));
+        yield return (PixelKind.Alternating, 0.0, s.Fill(i => i % 2 == 0 ? s.Low : s.High));
+        yield return (PixelKind.AlternatingInverted, 0.0, s.Fill(i => i % 2 == 0 ? s.High : s.Low));
+        yield return (PixelKind.OutsideWindowsRails, 0.0, s.OutsideRails());
+
+        var seen = new List<long[]>();
+        foreach (var check in s.Design.Proof.Checks)
+        {
+            if (check.WorstCaseCodes is { } w && w.Count == s.Design.Coefficients.Count)
+            {
+                var codes = s.WithWeighted(w);
+                if (!seen.Any(c => c.SequenceEqual(codes)))
+                {
+                    seen.Add(codes);
+                    yield return (PixelKind.WorstPrefix + check.Name, 0.0, codes);
+                }
+            }
+        }
+    }
+}

@@ -1,0 +1,21 @@
+namespace CoefGen.Core.Vectors;
+
+/// <summary>
+/// The reference datapath and testbench templates in templates/, rendered next to the vectors. The VHDL
+/// datapath uses the emitted vhdl-package, the Verilog one the verilog-include, the C bench the c-header.
+/// </summary>
+public static class ReferenceTemplates
+{
+    /// <summary>Built-in coefficient templates the reference files include.</summary>
+    public static IReadOnlyList<string> Packages { get; } = ["vhdl-package", "verilog-include", "c-header"];
+
+    /// <summary>(template file in templates/, output suffix after the prefix).</summary>
+    public static IReadOnlyList<(string FileName, string OutputSuffix)> Files { get; } =
+    [
+        ("ref-datapath.vhd.scriban", "_datapath.vhd"),
+        ("ref-tb.vhd.scriban", "_tb.vhd"),
+        ("ref-datapath.v.scriban", "_datapath.v"),
+        ("ref-tb.v.scriban", "_tb.v"),
+        ("ref-tb.c.scriban", "_tb.c"),
+    ];
+}
