@@ -7,12 +7,12 @@ namespace CoefGen.Core.Capture;
 /// exponential covariance W (pi f_p / 2) rho^|n|, rho = exp(-2 pi f_p / rate), has the discrete spectrum
 /// (2 / rate) W (pi f_p / 2) (1 - rho²) / (1 - 2 rho cos w + rho²) (derived here; PHYSICS.md §2 gives
 /// the covariance). B sums the 1/f-times-pole term over the first <see cref="AliasTerms"/> images on each
-/// side (the images fall off as 1/u³). D = 2 σ_d² / rate is the known digital floor.
+/// side (the images fall off as f_p²/u³, so beyond the fourth they add less than 1e-3 of the baseband term at Nyquist). D = 2 σ_d² / rate is the known digital floor.
 /// </summary>
 public sealed record SampledSpectrumModel(double WhiteV2PerHz, double FlickerCornerHz, double PoleHz, double DigitalFloorV2PerHz, double RateHz)
 {
     /// <summary>Images of the 1/f term summed on each side of the baseband.</summary>
-    public const int AliasTerms = 16;
+    public const int AliasTerms = 4;
 
     public double Psd(double fHz) => (WhiteV2PerHz * (White(fHz) + (FlickerCornerHz * Flicker(fHz)))) + DigitalFloorV2PerHz;
 

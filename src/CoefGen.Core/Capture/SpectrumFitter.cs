@@ -90,10 +90,11 @@ public static class SpectrumFitter
         var starts = new List<double[]>();
         if (previous is not null)
         {
-            starts.Add(previous);
+            // Later passes only drop masked bins: the previous optimum is the right start.
+            return Minimise(previous, s, y, used, floor, fixedPole);
         }
 
-        foreach (var fc in new[] { 4 * s.ResolutionHz, 30 * s.ResolutionHz, 300 * s.ResolutionHz })
+        foreach (var fc in new[] { 5 * s.ResolutionHz, 100 * s.ResolutionHz })
         {
             if (fixedPole is not null)
             {
@@ -101,7 +102,7 @@ public static class SpectrumFitter
                 continue;
             }
 
-            foreach (var fp in new[] { fs / 20, fs / 5, fs })
+            foreach (var fp in new[] { fs / 20, fs / 4 })
             {
                 starts.Add([Math.Log(w0), Math.Log(fc), Math.Log(fp)]);
             }
@@ -164,7 +165,7 @@ public static class SpectrumFitter
                 var trialRss = Rss(trial, s, y, used, floor, fixedPole);
                 if (double.IsFinite(trialRss) && trialRss < rss)
                 {
-                    var converged = rss - trialRss < 1e-12 * rss;
+                    var converged = rss - trialRss < 1e-9 * rss;
                     theta = trial;
                     rss = trialRss;
                     lambda = Math.Max(lambda / 10, 1e-9);
@@ -266,8 +267,9 @@ public static class SpectrumFitter
                 }
             }
 
-            // The Hann window's noise bandwidth is 1.5 bins: the summed excess times the bin width over 1.5 is the line power.
-            lines.Add(new InterferenceLine(s.FrequencyHz[peak], Math.Sqrt(excess * s.ResolutionHz / 1.5), i - start));
+            // Parseval: the density summed over the bins times the bin width is the line's power (the
+            // Hann main lobe spans +-2 bins, inside the guard).
+            lines.Add(new InterferenceLine(s.FrequencyHz[peak], Math.Sqrt(excess * s.ResolutionHz), i - start));
         }
 
         return lines;
