@@ -14,6 +14,7 @@ internal static class CliApp
             EmitCommand.Create(output, error),
             CheckCommand.Create(output, error),
             TargetsCommand.Create(output, error),
+            FitCommand.Create(output, error),
         };
 
     public static int Run(string[] args, TextWriter output, TextWriter error)
