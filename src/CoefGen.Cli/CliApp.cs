@@ -18,6 +18,7 @@ internal static class CliApp
             ReportCommand.Create(output, error),
             VectorsCommand.Create(output, error),
             VerifyCommand.Create(output, error),
+            FitCommand.Create(output, error),
         };
 
     public static int Run(string[] args, TextWriter output, TextWriter error)

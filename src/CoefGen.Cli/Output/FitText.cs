@@ -1,0 +1,59 @@
+using System.Text;
+using CoefGen.Core.Capture;
+using CoefGen.Core.Readout;
+
+namespace CoefGen.Cli.Output;
+
+/// <summary>Terminal summary of `coefgen fit`.</summary>
+internal static class FitText
+{
+    private static readonly string[] Header = ["scheme", "held-out e- rms", "95 % interval", "model e-", "design-half e-"];
+
+    public static string Render(ReadoutDescription d, CaptureAnalysisResult a)
+    {
+        var w = new StringBuilder();
+        var s = a.Spectrum;
+        var f = a.Fit;
+        var layout = a.Capture.Layout == CaptureLayout.Stream ? "stream" : $"{a.Capture.Rows} pixel cycles of {a.Capture.CycleLength}";
+        w.Append($"capture   {a.Capture.SourcePath}: {a.Capture.SampleCount} samples ({layout})\n");
+        w.Append($"spectrum  Welch, Hann, 50 % overlap: {s.Segments} segments of {s.SegmentLength} ({Eng.Si(s.ResolutionHz, "Hz")} bins), {Eng.Num(s.DegreesOfFreedom)} degrees of freedom, {Eng.Num(s.Confidence * 100, 3)} % band x{Eng.Num(s.LowerV2PerHz[0] / s.PsdV2PerHz[0])}..x{Eng.Num(s.UpperV2PerHz[0] / s.PsdV2PerHz[0])}\n\n");
+        w.Append("Fitted at the ADC input (1 sigma; digital floor fixed from [adc])\n");
+        w.Append($"  white        {Eng.Num(f.WhiteNvPerRtHz)} +- {Eng.Num(f.WhiteNvPerRtHzSigma, 2)} nV/rtHz\n");
+        w.Append($"  1/f corner   {Eng.Si(f.Model.FlickerCornerHz, "Hz")} +- {Eng.Si(f.FlickerCornerSigmaHz, "Hz", 2)}\n");
+        w.Append(f.PoleSigmaHz is double ps
+            ? $"  pole         {Eng.Si(f.Model.PoleHz, "Hz")} +- {Eng.Si(ps, "Hz", 2)}\n"
+            : $"  pole         {Eng.Si(f.Model.PoleHz, "Hz")} (held at noise.front_end_pole_hz)\n");
+        w.Append($"  floor        {Eng.Num(Math.Sqrt(f.Model.DigitalFloorV2PerHz) * 1e9)} nV/rtHz (quantisation + ADC noise)\n");
+        w.Append($"  residual     {Eng.Num(f.ResidualRms)} rms in ln S (chi-square alone: {Eng.Num(f.ExpectedResidualRms)})\n");
+        foreach (var line in f.Lines)
+        {
+            w.Append($"  line         {Eng.Si(line.FrequencyHz, "Hz")}: {Eng.Si(line.RmsV, "V")} rms, left out of the fit ({line.Bins} bins)\n");
+        }
+
+        w.Append("\nReady to paste into the readout file (replaces its [noise] section):\n\n");
+        w.Append(FittedNoiseSection.ToToml(d, a));
+        if (a.Validation.Count > 0)
+        {
+            var perE = d.Sensor.VoltsAtAdcPerElectron;
+            w.Append($"\nHeld-out validation: designed on cycles 0..{a.DesignRows.Count - 1}, measured on {a.HeldOutRows.Count} held-out cycles; capture covariance shrinkage {Eng.Num(a.Covariance!.Shrinkage, 3)}\n");
+            var table = new List<string[]> { Header };
+            foreach (var v in a.Validation)
+            {
+                table.Add([v.Label, Eng.Num(v.MeasuredSigmaV / perE), $"{Eng.Num(v.LowerSigmaV / perE)}..{Eng.Num(v.UpperSigmaV / perE)}", Eng.Num(v.PredictedModelSigmaV / perE), Eng.Num(v.PredictedCaptureSigmaV / perE)]);
+            }
+
+            foreach (var row in table)
+            {
+                w.Append("  ").Append(row[0].PadRight(28));
+                for (var c = 1; c < row.Length; c++)
+                {
+                    w.Append(row[c].PadLeft(c == 2 ? 16 : 15));
+                }
+
+                w.Append('\n');
+            }
+        }
+
+        return w.ToString();
+    }
+}

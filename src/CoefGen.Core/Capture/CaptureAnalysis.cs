@@ -1,0 +1,157 @@
+using System.Globalization;
+using CoefGen.Core.Diagnostics;
+using CoefGen.Core.Noise;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Weights;
+
+namespace CoefGen.Core.Capture;
+
+/// <summary>
+/// From a parsed capture and its readout file: Welch spectrum of the noise record, fit of white + 1/f
+/// + pole, and for pixel cycles the shrunk capture covariance, optimal weights on it and a held-out
+/// comparison of every scheme. The spectrum and fit use all cycles (three parameters: negligible
+/// leakage into the held-out half); the capture covariance uses only the design cycles.
+/// Throws <see cref="InputException"/> with CG5xxx diagnostics when the capture cannot be analysed.
+/// </summary>
+public static class CaptureAnalysis
+{
+    public const string FittedSourceName = "fitted from capture";
+
+    public static CaptureAnalysisResult Run(ReadoutDescription description, SampleCapture capture, CaptureAnalysisOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(description);
+        ArgumentNullException.ThrowIfNull(capture);
+        ArgumentNullException.ThrowIfNull(options);
+        var adc = description.Adc;
+        var file = SourceLocation.FileOnly(capture.SourcePath);
+        if (capture.Layout == CaptureLayout.PixelSynchronous && capture.CycleLength != description.Timing.PixelSamples)
+        {
+            throw Fail(CaptureCodes.WrongLayout, file,
+                $"the capture has {Int(capture.CycleLength)} samples per cycle but timing.pixel_samples is {Int(description.Timing.PixelSamples)}");
+        }
+
+        var record = CaptureSamples.ResidualStream(capture, adc.LsbV);
+        var segment = options.SegmentLength ?? WelchEstimator.DefaultSegmentLength(record.Length);
+        if (segment > record.Length / 2)
+        {
+            throw Fail(CaptureCodes.TooFewSamples, file,
+                $"a Welch segment of {Int(segment)} samples needs at least {Int(2 * segment)} samples; the capture has {Int(record.Length)}");
+        }
+
+        var spectrum = WelchEstimator.Estimate(record, adc.RateHz, segment);
+        double? fixedPole = null;
+        if (options.FixPole)
+        {
+            fixedPole = description.Noise.FrontEndPoleHz
+                ?? throw Fail(CaptureCodes.FitFailed, description.LocationOf("noise"), "the pole is to be held but the readout file gives no noise.front_end_pole_hz");
+        }
+
+        var fit = SpectrumFitter.Fit(spectrum, adc.DigitalVarianceV2, fixedPole)
+            ?? throw Fail(CaptureCodes.FitFailed, file,
+                "white + 1/f + pole does not fit this spectrum (no finite optimum with a determined Jacobian); try --fix-pole or a longer capture");
+
+        var lowCutoff = description.Noise.Sources.Count > 0 ? description.Noise.Sources[0].LowCutoffHz : 0.01;
+        var model = fit.Model;
+        var fitted = new NoiseModel(
+            [
+                ParametricNoiseComponent.White(FittedSourceName + " white", model.WhiteV2PerHz, model.PoleHz, null),
+                ParametricNoiseComponent.Flicker(FittedSourceName + " 1/f", model.WhiteV2PerHz * model.FlickerCornerHz, lowCutoff, model.PoleHz, null),
+            ],
+            adc.DigitalVarianceV2);
+        var grid = SampleGrid.FromDescription(description);
+        var result = new CaptureAnalysisResult
+        {
+            Capture = capture,
+            Spectrum = spectrum,
+            Fit = fit,
+            LowCutoffHz = lowCutoff,
+            FittedNoise = fitted,
+            DesignRows = [],
+            HeldOutRows = [],
+            Grid = grid,
+        };
+        return capture.Layout == CaptureLayout.Stream ? result : WithValidation(result, description, options);
+    }
+
+    /// <summary>The capture covariance of a pixel-synchronous capture and optimal weights designed on it (no validation split: all cycles).</summary>
+    public static (CaptureCovariance Covariance, OptimalSolution Solution) DesignOnCapture(
+        ReadoutDescription description, SampleCapture capture, NoiseModel target)
+    {
+        ArgumentNullException.ThrowIfNull(description);
+        ArgumentNullException.ThrowIfNull(capture);
+        ArgumentNullException.ThrowIfNull(target);
+        var grid = SampleGrid.FromDescription(description);
+        var covariance = CaptureCovariance.Estimate(capture, Enumerable.Range(0, capture.Rows).ToArray(), grid, description.Adc.LsbV, Dense(target.Sample(grid)));
+        return (covariance, SolveOnCapture(description, grid, covariance, capture));
+    }
+
+    private static CaptureAnalysisResult WithValidation(CaptureAnalysisResult result, ReadoutDescription d, CaptureAnalysisOptions options)
+    {
+        var capture = result.Capture;
+        var grid = result.Grid;
+        var design = Math.Clamp((int)Math.Round(capture.Rows * options.DesignFraction), 1, capture.Rows - 1);
+        int[] designRows = [.. Enumerable.Range(0, design)];
+        int[] heldOut = [.. Enumerable.Range(design, capture.Rows - design)];
+        if (designRows.Length < 8 || heldOut.Length < 8)
+        {
+            throw Fail(CaptureCodes.TooFewSamples, SourceLocation.FileOnly(capture.SourcePath),
+                $"the split leaves {Int(designRows.Length)} design and {Int(heldOut.Length)} held-out cycles; each needs at least 8");
+        }
+
+        var modelCovariance = result.FittedNoise.Sample(grid);
+        var covariance = CaptureCovariance.Estimate(capture, designRows, grid, d.Adc.LsbV, Dense(modelCovariance));
+        var rejectDrift = d.Weights.RejectDrift;
+        var schemes = new List<(string Label, double[] H)>
+        {
+            ("boxcar", BoxcarWeights.Compute(grid, rejectDrift).H),
+            (ShapedWeights.Compute(grid, d.Weights).Label, ShapedWeights.Compute(grid, d.Weights).H),
+        };
+        try
+        {
+            schemes.Add(("optimal (fitted model)", OptimalWeights.Compute(grid, modelCovariance, rejectDrift).Weights.H));
+        }
+        catch (CovarianceNotPositiveDefiniteException ex)
+        {
+            throw Fail(CaptureCodes.FitFailed, SourceLocation.FileOnly(capture.SourcePath), $"the fitted model is not positive definite on the grid ({ex.Message})");
+        }
+
+        schemes.Add(("optimal (capture)", SolveOnCapture(d, grid, covariance, capture).H));
+        var validation = schemes
+            .Select(s => HeldOutValidation.Evaluate(
+                s.Label, s.H, capture, heldOut, grid, d.Adc.LsbV, modelCovariance.QuadraticForm(s.H), covariance.SampleQuadraticForm(s.H)))
+            .ToArray();
+        return result with { DesignRows = designRows, HeldOutRows = heldOut, Covariance = covariance, Validation = validation };
+    }
+
+    private static OptimalSolution SolveOnCapture(ReadoutDescription d, SampleGrid grid, CaptureCovariance covariance, SampleCapture capture)
+    {
+        try
+        {
+            return DenseMatrixOptimalSolver.Solve(grid, covariance.Matrix, d.Weights.RejectDrift);
+        }
+        catch (CovarianceNotPositiveDefiniteException ex)
+        {
+            throw Fail(CaptureCodes.FitFailed, SourceLocation.FileOnly(capture.SourcePath), $"the capture covariance is not positive definite on the constraint null space ({ex.Message})");
+        }
+    }
+
+    private static double[] Dense(SampledCovariance r)
+    {
+        var n = r.Count;
+        var m = new double[n * n];
+        for (var i = 0; i < n; i++)
+        {
+            for (var j = 0; j < n; j++)
+            {
+                m[(i * n) + j] = r.At(i, j);
+            }
+        }
+
+        return m;
+    }
+
+    private static InputException Fail(string code, SourceLocation location, string message) =>
+        new(Diagnostic.Error(code, location, message));
+
+    private static string Int(int v) => v.ToString(CultureInfo.InvariantCulture);
+}
