@@ -63,9 +63,16 @@ public static class DesignPipeline
             OptimalSolver = solver.Name,
             FixedPointSettings = resolution.Settings,
             Datapath = integer,
-            Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning)],
+            Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning), .. CaptureNotice(description)],
         };
     }
+
+    // design predicts and quantises on the parametric model; weights designed on a capture come from `coefgen fit`.
+    private static IEnumerable<Diagnostic> CaptureNotice(ReadoutDescription d) =>
+        d.Noise.CapturePath is null
+            ? []
+            : [Diagnostic.Warning("CG1309", d.LocationOf("noise.capture"),
+                "design uses the parametric noise model; run `coefgen fit CAPTURE --readout FILE` for weights designed on the capture and their held-out read noise")];
 
     private static IReadOnlyList<WeightSet> SolveWeights(ReadoutDescription d, SampleGrid grid, SampledCovariance r, IOptimalSolver solver)
     {
