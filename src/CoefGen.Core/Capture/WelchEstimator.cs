@@ -29,7 +29,7 @@ public static class WelchEstimator
     public static WelchSpectrum Estimate(IReadOnlyList<double> samplesV, double rateHz, int segmentLength, double confidence = 0.95)
     {
         ArgumentNullException.ThrowIfNull(samplesV);
-        if (!RadixTwoFft.IsPowerOfTwo(segmentLength) || segmentLength < 8 || samplesV.Count < segmentLength)
+        if (!int.IsPow2(segmentLength) || segmentLength < 8 || samplesV.Count < segmentLength)
         {
             throw new ArgumentException($"segment length must be a power of two >= 8 and at most the {samplesV.Count} samples");
         }
@@ -53,6 +53,7 @@ public static class WelchEstimator
 
         var bins = (l / 2) - 1;
         var acc = new double[bins];
+        var fft = new CoefGen.Core.Weights.Structured.Fft(l);
         var re = new double[l];
         var im = new double[l];
         for (var s = 0; s < segments; s++)
@@ -71,7 +72,7 @@ public static class WelchEstimator
                 im[n] = 0;
             }
 
-            RadixTwoFft.Forward(re, im);
+            fft.Forward(re, im); // only |X_k|^2 is used, so the transform's sign convention does not matter
             for (var k = 1; k <= bins; k++)
             {
                 acc[k - 1] += (re[k] * re[k]) + (im[k] * im[k]);

@@ -20,19 +20,34 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
             throw new ArgumentException($"covariance has {r.Count} samples, grid {n}");
         }
 
-        var basis = HouseholderBasis.Factor(ConstraintSystem.FromGrid(grid, rejectDrift));
-        var m = basis.Constraints;
-        var y = basis.SolveTransposedTriangle(rejectDrift ? [0.0, 1.0, 0.0] : [0.0, 1.0]);
-
         var c = new double[n * n];
-        var scale = 0.0;
         for (var i = 0; i < n; i++)
         {
             for (var j = 0; j < n; j++)
             {
                 c[(i * n) + j] = r.At(i, j);
             }
+        }
 
+        var h = SolveOnMatrix(grid, c, rejectDrift);
+        return new OptimalSolution(h, r.QuadraticForm(h));
+    }
+
+    /// <summary>
+    /// The null-space step on a symmetric row-major N x N matrix <paramref name="c"/> (overwritten):
+    /// Householder basis Q of the constraints, M = Q^T C Q, M22 z = -M21 y by Cholesky, h = Q [y; z].
+    /// Shared by the lag-table path and the capture (general matrix) path.
+    /// </summary>
+    internal static double[] SolveOnMatrix(SampleGrid grid, double[] c, bool rejectDrift)
+    {
+        var n = grid.Count;
+        var basis = HouseholderBasis.Factor(ConstraintSystem.FromGrid(grid, rejectDrift));
+        var m = basis.Constraints;
+        var y = basis.SolveTransposedTriangle(rejectDrift ? [0.0, 1.0, 0.0] : [0.0, 1.0]);
+
+        var scale = 0.0;
+        for (var i = 0; i < n; i++)
+        {
             scale = Math.Max(scale, Math.Abs(c[(i * n) + i]));
         }
 
@@ -72,6 +87,6 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
         Array.Copy(y, h, m);
         Array.Copy(z, 0, h, m, k);
         basis.ApplyQ(h);
-        return new OptimalSolution(h, r.QuadraticForm(h));
+        return h;
     }
 }

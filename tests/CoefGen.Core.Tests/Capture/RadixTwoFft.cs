@@ -1,7 +1,7 @@
-namespace CoefGen.Core.Capture;
+namespace CoefGen.Core.Tests.Capture;
 
-/// <summary>
-/// In-place iterative radix-2 FFT (Cooley-Tukey 1965), forward sign e^{-i 2 pi k n / N}, no scaling.
+/// <summary>Test-only, independent of the production FFT (Weights/Structured/Fft) that the estimator uses.
+/// <summary>Test-only FFT for synthesising captures, independent of the production FFT (Weights/Structured/Fft).
 /// Written here rather than taken from a library so the bits never depend on a native provider.
 /// </summary>
 internal static class RadixTwoFft
