@@ -1,6 +1,5 @@
 namespace CoefGen.Core.Tests.Capture;
 
-/// <summary>Test-only, independent of the production FFT (Weights/Structured/Fft) that the estimator uses.
 /// <summary>Test-only FFT for synthesising captures, independent of the production FFT (Weights/Structured/Fft).
 /// Written here rather than taken from a library so the bits never depend on a native provider.
 /// </summary>
