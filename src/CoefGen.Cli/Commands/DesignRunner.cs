@@ -1,10 +1,12 @@
 using CoefGen.Cli.Io;
+using CoefGen.Core.Capture;
 using CoefGen.Core.Diagnostics;
 using CoefGen.Core.Pipeline;
+using CoefGen.Core.Readout;
 
 namespace CoefGen.Cli.Commands;
 
-/// <summary>Shared by every command that starts from a readout file: load, validate, run the pipeline.</summary>
+/// <summary>Shared by every command that starts from a readout file: load, validate, run the pipeline, apply a capture.</summary>
 internal static class DesignRunner
 {
     /// <summary>Runs the design; on bad input prints every diagnostic to <paramref name="error"/> and returns null.</summary>
@@ -22,6 +24,17 @@ internal static class DesignRunner
         try
         {
             var result = DesignPipeline.Run(load.Description, catalog);
+            if (load.Description.Noise.CapturePath is string capturePath)
+            {
+                var capture = LoadCapture(load.Description, readoutPath, capturePath, error);
+                if (capture is null)
+                {
+                    return null;
+                }
+
+                result = CaptureDesign.Apply(result, capture);
+            }
+
             DiagnosticPrinter.Print(error, result.Warnings);
             return result;
         }
@@ -30,5 +43,31 @@ internal static class DesignRunner
             DiagnosticPrinter.PrintFailure(error, ex.Diagnostics);
             return null;
         }
+    }
+
+    private static SampleCapture? LoadCapture(ReadoutDescription d, string readoutPath, string capturePath, TextWriter error)
+    {
+        var path = InputFiles.ResolveRelative(readoutPath, capturePath);
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
+        {
+            var reason = ex is FileNotFoundException or DirectoryNotFoundException ? "file not found" : ex.Message;
+            DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.Unreadable, d.LocationOf("noise.capture"), $"cannot read the capture '{capturePath}': {reason}", "noise.capture")]);
+            return null;
+        }
+
+        var format = new CaptureFormat(CaptureFormat.EncodingFromFileName(capturePath), CaptureLayout.PixelSynchronous, d.Timing.PixelSamples);
+        var parsed = CaptureParser.Parse(bytes, Path.Combine(Path.GetDirectoryName(readoutPath) ?? "", capturePath), format, d.Adc);
+        if (parsed.Capture is null)
+        {
+            DiagnosticPrinter.PrintFailure(error, parsed.Diagnostics);
+            return null;
+        }
+
+        return parsed.Capture;
     }
 }

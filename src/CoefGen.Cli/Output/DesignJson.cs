@@ -88,6 +88,15 @@ internal static class DesignJson
         }
 
         w.WriteNumber("digital_variance_v2", r.Covariance.DigitalVarianceV2);
+        if (r.CaptureSource is not null)
+        {
+            w.WriteString("capture", r.CaptureSource);
+        }
+        else
+        {
+            w.WriteNull("capture");
+        }
+
         w.WriteStartArray("components");
         foreach (var c in r.Covariance.Components)
         {

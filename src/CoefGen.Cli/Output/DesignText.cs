@@ -43,6 +43,11 @@ internal static class DesignText
             sb.Append($"  noise     {s.Name} at the {(s.At == NoiseReference.Sensor ? "sensor" : "ADC")}: {Eng.Num(s.WhiteNvPerRtHz)} nV/rtHz{flicker}\n");
         }
 
+        if (r.CaptureSource is not null)
+        {
+            sb.Append($"  noise     {r.CaptureSource}; every prediction below uses this covariance\n");
+        }
+
         if (n.Table is not null)
         {
             sb.Append($"  noise     measured spectrum {n.Table.Name}: {n.Table.FrequencyHz.Count} points, {Eng.Si(n.Table.FrequencyHz[0], "Hz")} to {Eng.Si(n.Table.FrequencyHz[^1], "Hz")} (flat below, f^-2 above)\n");

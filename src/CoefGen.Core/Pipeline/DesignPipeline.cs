@@ -67,12 +67,12 @@ public static class DesignPipeline
         };
     }
 
-    // design predicts and quantises on the parametric model; weights designed on a capture come from `coefgen fit`.
+    // Core does not read files: the CLI parses noise.capture and calls CaptureDesign.Apply, which drops this warning.
     private static IEnumerable<Diagnostic> CaptureNotice(ReadoutDescription d) =>
         d.Noise.CapturePath is null
             ? []
             : [Diagnostic.Warning("CG1309", d.LocationOf("noise.capture"),
-                "design uses the parametric noise model; run `coefgen fit CAPTURE --readout FILE` for weights designed on the capture and their held-out read noise")];
+                "the capture was not applied: this design uses the parametric noise model only (the coefgen command applies noise.capture; `coefgen fit` shows held-out read noise)")];
 
     private static IReadOnlyList<WeightSet> SolveWeights(ReadoutDescription d, SampleGrid grid, SampledCovariance r, IOptimalSolver solver)
     {

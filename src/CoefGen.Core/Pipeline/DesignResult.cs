@@ -32,6 +32,9 @@ public sealed record DesignResult
     /// <summary>The integer datapath of the chosen scheme.</summary>
     public required IntegerDesign Datapath { get; init; }
 
+    /// <summary>When the noise comes from a capture (noise.capture): the file and how its covariance was formed; null otherwise.</summary>
+    public string? CaptureSource { get; init; }
+
     /// <summary>Warnings from every stage.</summary>
     public required IReadOnlyList<Diagnostic> Warnings { get; init; }
 

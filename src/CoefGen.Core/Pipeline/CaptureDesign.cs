@@ -1,0 +1,58 @@
+using System.Globalization;
+using CoefGen.Core.Capture;
+using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Prediction;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Weights;
+
+namespace CoefGen.Core.Pipeline;
+
+/// <summary>
+/// `noise.capture` in the readout file: the covariance of the window samples comes from the capture itself
+/// (mean waveform removed, shrunk towards the parametric model, see <see cref="CaptureCovariance"/>), the
+/// optimal weights are designed on it, and every scheme's read noise is predicted on it. The integer design
+/// is redone for the new chosen weights; its refinement and noise penalty use the parametric model.
+/// </summary>
+public static class CaptureDesign
+{
+    public static DesignResult Apply(DesignResult model, SampleCapture capture)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        ArgumentNullException.ThrowIfNull(capture);
+        var d = model.Description;
+        var (covariance, solution) = CaptureAnalysis.DesignOnCapture(d, capture, model.Noise);
+        var shrinkage = covariance.Shrinkage.ToString("0.000", CultureInfo.InvariantCulture);
+        var source = $"capture covariance ({covariance.Pixels.ToString(CultureInfo.InvariantCulture)} cycles, shrinkage {shrinkage})";
+        var optimalLabel = d.Weights.RejectDrift ? "optimal on the capture (drift rejected)" : "optimal on the capture";
+        WeightSet[] weights = [model.Weights[0], model.Weights[1], new WeightSet(WeightScheme.Optimal, optimalLabel, solution.H)];
+        var predictions = weights.Select(w => Predict(w, covariance, d, source)).ToArray();
+        var chosen = weights.First(w => w.Scheme == d.Weights.Scheme);
+        var t = d.Timing;
+        var datapath = FixedPointDesigner.Design(
+            d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, t.Reset, t.Signal);
+        return model with
+        {
+            Weights = weights,
+            Predictions = predictions,
+            Datapath = datapath,
+            CaptureSource = $"{capture.SourcePath}: {source}",
+            Warnings = [.. model.Warnings.Where(w => w.Code != "CG1309")],
+        };
+    }
+
+    private static NoisePrediction Predict(WeightSet w, CaptureCovariance c, ReadoutDescription d, string source)
+    {
+        var variance = c.QuadraticForm(w.H);
+        var sigma = Math.Sqrt(Math.Max(0, variance));
+        return new NoisePrediction(
+            w.Scheme,
+            w.Label,
+            variance,
+            sigma,
+            sigma / d.Adc.LsbV,
+            sigma / d.Sensor.VoltsAtAdcPerElectron,
+            [new NoiseBudgetEntry(source, variance, 1.0)],
+            null,
+            null);
+    }
+}
