@@ -13,6 +13,7 @@ using CoefGen.Core.Weights.Structured;
 //   precond [n...]     iterations and time per preconditioner
 //   crossover [n...]   Stopwatch dense vs structured at small sizes (for OptimalSolverChoice)
 //   peak n             one structured solve of 2 x n in this process: time, iterations, allocated bytes, peak working set
+//   design             BenchmarkDotNet: the whole DesignPipeline.Run of each shipped example and of a 2x4096 readout
 MathNet.Numerics.Control.UseManaged();
 var mode = args.Length > 0 ? args[0] : "bench";
 var sizes = args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).ToArray();
@@ -32,6 +33,19 @@ switch (mode)
             .WithId("short");
         var config = DefaultConfig.Instance.AddJob(job).WithOptions(ConfigOptions.DisableOptimizationsValidator);
         BenchmarkRunner.Run([typeof(SolverComparison), typeof(LargeStructured)], config);
+        break;
+    case "design":
+        // In-process as above. Throughput with the pilot choosing invocations per iteration (about 100 for a
+        // millisecond example, 1 for 2x4096); 3 warm-up and 15 measured iterations keep the whole run about a minute.
+        var designJob = Job.Default
+            .WithToolchain(new InProcessEmitToolchain(TimeSpan.FromMinutes(30), logOutput: true))
+            .WithLaunchCount(1)
+            .WithWarmupCount(3)
+            .WithIterationCount(15)
+            .WithId("design");
+        BenchmarkRunner.Run<DesignPipelineBenchmarks>(DefaultConfig.Instance.AddJob(designJob)
+            .WithOptions(ConfigOptions.DisableOptimizationsValidator)
+            .WithSummaryStyle(BenchmarkDotNet.Reports.SummaryStyle.Default.WithMaxParameterColumnWidth(24)));
         break;
     case "precond":
         foreach (var n in sizes.Length > 0 ? sizes : [256, 1024, 4096])
@@ -94,7 +108,7 @@ switch (mode)
         }
 
     default:
-        Console.Error.WriteLine("modes: bench | precond [n...] | crossover [n...] | peak n");
+        Console.Error.WriteLine("modes: bench | design | precond [n...] | crossover [n...] | peak n");
         return 2;
 }
 

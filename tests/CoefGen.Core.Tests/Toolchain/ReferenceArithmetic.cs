@@ -6,13 +6,19 @@ namespace CoefGen.Core.Tests.Toolchain;
 
 /// <summary>
 /// Test-only big-integer reference of the arithmetic documented on <see cref="IntegerDesign"/>, written
-/// straight from that comment (to be replaced by BitExactModel once that stage lands).
+/// straight from that comment before BitExactModel existed. Kept as an independent second implementation:
+/// the toolchain tests compare emitted code against it, and ReferenceArithmeticAgreementTests pins it to
+/// BitExactModel, so "the C matches the reference" also means "the C matches the model".
 /// </summary>
 public static class ReferenceArithmetic
 {
     /// <summary>One output from the pixel cycle's ADC codes (as the ADC writes them, indexed by cycle sample).</summary>
-    public static BigInteger Apply(IntegerDesign d, IReadOnlyList<long> cycleCodes)
+    public static BigInteger Apply(IntegerDesign d, IReadOnlyList<long> cycleCodes) => Evaluate(d, cycleCodes).Output;
+
+    /// <summary>The accumulator, the output and both clip flags for one pixel cycle (codes indexed by cycle sample).</summary>
+    public static ReferenceArithmeticResult Evaluate(IntegerDesign d, IReadOnlyList<long> cycleCodes)
     {
+        var clipped = false;
         var accMin = -(BigInteger.One << (d.AccBits - 1));
         var accMax = (BigInteger.One << (d.AccBits - 1)) - 1;
         BigInteger acc = 0;
@@ -27,7 +33,9 @@ public static class ReferenceArithmetic
             acc += d.Coefficients[k] * x;
             if (d.Accumulator == AccumulatorMode.Saturate)
             {
-                acc = BigInteger.Min(accMax, BigInteger.Max(accMin, acc));
+                var clamped = BigInteger.Min(accMax, BigInteger.Max(accMin, acc));
+                clipped |= clamped != acc;
+                acc = clamped;
             }
             else
             {
@@ -39,7 +47,8 @@ public static class ReferenceArithmetic
         var q = Round(m, d.Shift, d.Rounding);
         var outMin = -(BigInteger.One << (d.OutputBits - 1));
         var outMax = (BigInteger.One << (d.OutputBits - 1)) - 1;
-        return BigInteger.Min(outMax, BigInteger.Max(outMin, q));
+        var output = BigInteger.Min(outMax, BigInteger.Max(outMin, q));
+        return new ReferenceArithmeticResult(acc, output, clipped, output != q);
     }
 
     /// <summary>Two's-complement wrap to <paramref name="bits"/> bits.</summary>
