@@ -36,6 +36,7 @@ public static class CaptureDesign
             Predictions = predictions,
             Datapath = datapath,
             CaptureSource = $"{capture.SourcePath}: {source}",
+            OptimalSolver = "dense null-space on the capture covariance",
             Warnings = [.. model.Warnings.Where(w => w.Code != "CG1309")],
         };
     }
