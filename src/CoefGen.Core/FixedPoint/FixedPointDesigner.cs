@@ -14,7 +14,7 @@ public static class FixedPointDesigner
     public const double OutputNoiseBudget = 0.01;
 
     public static IntegerDesign Design(string name, SampleGrid grid, IReadOnlyList<double> h, SampledCovariance r, AdcSpec adc,
-        FixedPointSettings settings, int pixelSamples, SampleWindow reset, SampleWindow signal)
+        FixedPointSettings settings, int pixelSamples, SampleWindow reset, SampleWindow signal, bool rejectDrift = false)
     {
         ArgumentNullException.ThrowIfNull(name);
         ArgumentNullException.ThrowIfNull(grid);
@@ -37,7 +37,7 @@ public static class FixedPointDesigner
         // Shift mode keeps the gain a pure shift even when the signal samples are not fully settled: the
         // residual settling error then shows up as a (reported) gain error instead of a post-multiplier.
         var powerOfTwo = settings.Normalize == NormalizeMode.Shift;
-        var q = Quantiser.Quantise(h, grid, r, settings.CoefBits, powerOfTwo);
+        var q = Quantiser.Quantise(h, grid, r, settings.CoefBits, powerOfTwo, rejectDrift);
         var c = q.Coefficients;
 
         var sigmaReal = Math.Sqrt(r.QuadraticForm(h)) / Math.Abs(Gain(h.Select(v => v), grid));

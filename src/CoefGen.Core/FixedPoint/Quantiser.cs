@@ -19,7 +19,8 @@ public static class Quantiser
     /// <param name="r">Noise covariance at the samples (the refinement lowers c^T R c / (sum c s)^2).</param>
     /// <param name="coefBits">Signed coefficient width.</param>
     /// <param name="powerOfTwoGain">Require signal sum 2^P and reset sum -2^P (only meaningful for a settled grid).</param>
-    public static QuantisedWeights Quantise(IReadOnlyList<double> h, SampleGrid grid, SampledCovariance r, int coefBits, bool powerOfTwoGain)
+    /// <param name="rejectDrift">Also make sum c n = 0 exactly (n: cycle sample index), the integer form of sum h t = 0.</param>
+    public static QuantisedWeights Quantise(IReadOnlyList<double> h, SampleGrid grid, SampledCovariance r, int coefBits, bool powerOfTwoGain, bool rejectDrift = false)
     {
         ArgumentNullException.ThrowIfNull(h);
         ArgumentNullException.ThrowIfNull(grid);
@@ -56,6 +57,11 @@ public static class Quantiser
             if (c.Max(v => Math.Abs(v)) <= limit)
             {
                 var moves = Refine(c, x, grid, r, limit, powerOfTwoGain);
+                if (rejectDrift && !DriftRepair.Apply(c, x, grid, limit, powerOfTwoGain))
+                {
+                    continue; // no pair move fits at this scale: try one bit less headroom
+                }
+
                 return new QuantisedWeights(c, p, powerOfTwoGain, moves);
             }
         }

@@ -29,7 +29,7 @@ public static class CaptureDesign
         var chosen = weights.First(w => w.Scheme == d.Weights.Scheme);
         var t = d.Timing;
         var datapath = FixedPointDesigner.Design(
-            d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, t.Reset, t.Signal);
+            d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, t.Reset, t.Signal, d.Weights.RejectDrift);
         return model with
         {
             Weights = weights,

@@ -50,7 +50,7 @@ public static class DesignPipeline
         var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
         var t = description.Timing;
         var integer = FixedPointDesigner.Design(
-            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal);
+            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift);
 
         return new DesignResult
         {
