@@ -31,7 +31,7 @@ internal static class SweepSearchText
 
         var b = r.Best.Layout;
         sb.Append($"split of the {Eng.Int(r.PixelSamples)}-sample pixel cycle ({Eng.Si(r.PixelSamples / rateHz, "s")}, {scheme}): " +
-                  $"reset {Eng.Int(b.ResetCount)}, dead time {Eng.Num(b.DeadSamples)} ({Eng.Si(b.DeadSamples / rateHz, "s")}), signal {Eng.Int(b.SignalCount)} samples " +
+                  $"reset {Eng.Int(b.ResetCount)}, dead time {b.DeadSamples.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)} ({Eng.Si(b.DeadSamples / rateHz, "s")}), signal {Eng.Int(b.SignalCount)} samples " +
                   $"-> {Eng.Num(r.Best.Outcome.NoiseOf(r.Scheme))} e- rms\n");
         sb.Append($"  {r.Note}; neighbours move one sample between a window and the dead time\n");
         sb.Append(Table([r.Best, .. r.Neighbours], r.Scheme, t => ReferenceEquals(t, r.Best), _ => ""));
@@ -51,13 +51,13 @@ internal static class SweepSearchText
             if (!o.Valid)
             {
                 var d = o.Diagnostics.Count > 0 ? o.Diagnostics[0] : null;
-                table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), Eng.Num(l.DeadSamples), Eng.Int(l.SignalCount), Eng.Int(l.PixelSamples), "", "", "",
+                table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), l.DeadSamples.ToString("G6", System.Globalization.CultureInfo.InvariantCulture), Eng.Int(l.SignalCount), Eng.Int(l.PixelSamples), "", "", "",
                     "invalid: " + (d is null ? "" : $"{d.Code} {d.Message}"), "");
                 continue;
             }
 
             var s = o.Schemes.First(x => x.Scheme == scheme);
-            table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), Eng.Num(l.DeadSamples), Eng.Int(l.SignalCount), Eng.Int(o.PixelSamples),
+            table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), l.DeadSamples.ToString("G6", System.Globalization.CultureInfo.InvariantCulture), Eng.Int(l.SignalCount), Eng.Int(o.PixelSamples),
                 Eng.Si(o.PixelTimeS, "s"), Eng.Num(s.NoiseElectrons), Eng.Num(s.NoiseAdu), o.Safe ? "safe" : "NOT SAFE", verdict(t));
         }
 

@@ -17,7 +17,10 @@ public static class DesignPipeline
     /// <summary>Above this many weighted samples the frequency-domain cross-check is skipped (it is O(N * span)).</summary>
     public const int FrequencyCheckLimit = 4096;
 
-    public static DesignResult Run(ReadoutDescription description, TargetCatalog catalog)
+    /// <param name="description">A validated readout description.</param>
+    /// <param name="catalog">Target profiles.</param>
+    /// <param name="frequencyCheck">Compute the frequency-domain cross-check (sweeps turn it off: it changes no prediction).</param>
+    public static DesignResult Run(ReadoutDescription description, TargetCatalog catalog, bool frequencyCheck = true)
     {
         ArgumentNullException.ThrowIfNull(description);
         ArgumentNullException.ThrowIfNull(catalog);
@@ -40,7 +43,7 @@ public static class DesignPipeline
         var solver = OptimalSolverSelection.For(grid.Count);
         var weights = SolveWeights(description, grid, covariance, solver.Solver);
 
-        Func<IReadOnlyList<double>, double>? frequencyDomain = grid.Count <= FrequencyCheckLimit
+        Func<IReadOnlyList<double>, double>? frequencyDomain = frequencyCheck && grid.Count <= FrequencyCheckLimit
             ? h => FrequencyDomainVariance.ComputeByComponent(noise, grid, h).Sum()
             : null;
         var predictions = weights

@@ -39,7 +39,7 @@ public sealed class DesignPoint
 
         try
         {
-            var result = DesignPipeline.Run(load.Description, _catalog);
+            var result = DesignPipeline.Run(load.Description, _catalog, frequencyCheck: false);
             diagnostics = [.. load.Diagnostics, .. result.Warnings];
             return result;
         }
