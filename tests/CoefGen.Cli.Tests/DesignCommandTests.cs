@@ -76,4 +76,35 @@ public class DesignCommandTests
         Assert.Contains("rate_hz", r.Error, StringComparison.Ordinal);
         Assert.DoesNotContain("   at ", r.Error, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Windows_too_far_apart_for_the_lag_tables_are_a_located_error_not_a_hang()
+    {
+        var dir = RepoPaths.TempDir();
+        var text = File.ReadAllText(RepoPaths.Example("fast_imaging.toml"))
+            .Replace("pixel_samples = 80", "pixel_samples = 50000000", StringComparison.Ordinal)
+            .Replace("transfer_sample = 40", "transfer_sample = 30000000", StringComparison.Ordinal)
+            .Replace("start = 46", "start = 40000000", StringComparison.Ordinal);
+        var path = Path.Combine(dir, "far.toml");
+        File.WriteAllText(path, text);
+        var r = CliRunner.Run("design", path);
+        Assert.Equal(2, r.ExitCode);
+        Assert.Contains("CG1207", r.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void A_signal_window_that_never_sees_the_step_is_a_located_error()
+    {
+        var dir = RepoPaths.TempDir();
+        // One signal sample exactly at the transfer instant: s = 0 there, so there is no gain to the charge.
+        var text = File.ReadAllText(RepoPaths.Example("fast_imaging.toml"))
+            .Replace("transfer_sample = 40", "transfer_sample = 46", StringComparison.Ordinal)
+            .Replace("start = 46\ncount = 28", "start = 46\ncount = 1", StringComparison.Ordinal);
+        var path = Path.Combine(dir, "nostep.toml");
+        File.WriteAllText(path, text);
+        var r = CliRunner.Run("design", path);
+        Assert.Equal(2, r.ExitCode);
+        Assert.Contains("CG1206", r.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", r.Error, StringComparison.Ordinal);
+    }
 }

@@ -10,6 +10,9 @@ namespace CoefGen.Core.Pipeline;
 /// </summary>
 internal static class DesignFeasibility
 {
+    /// <summary>Largest span from the first reset sample to the last signal sample (2^21: 16 MB per lag table).</summary>
+    public const int MaxSpanSamples = 1 << 21;
+
     public static IReadOnlyList<Diagnostic> Check(ReadoutDescription d, SampleGrid grid)
     {
         var bag = new DiagnosticBag();
@@ -31,6 +34,13 @@ internal static class DesignFeasibility
         {
             bag.Error("CG1206", d.LocationOf("timing.signal.start"),
                 "no signal-window sample sees the charge step (every sample lies at or before the transfer instant); start the signal window after timing.transfer_*");
+        }
+
+        var span = grid.SampleIndex[^1] - grid.SampleIndex[0] + 1;
+        if (span > MaxSpanSamples)
+        {
+            bag.Error("CG1207", d.LocationOf("timing.signal.start"),
+                $"the reset and signal windows span {span} samples; at most {MaxSpanSamples} are supported (the covariance keeps one value per lag of the span); move the windows closer or lower adc.rate_hz");
         }
 
         if (d.Weights.RejectDrift && (grid.ResetCount < 2 || grid.SignalCount < 2))
