@@ -98,6 +98,11 @@ internal static class SweepCommand
             }
 
             baseline = baseResult.Description;
+            if (baseline.Noise.CapturePath is not null)
+            {
+                error.WriteLine($"{baseline.LocationOf("noise.capture")}: note: sweeps use the parametric noise model at every point; noise.capture is applied by design, emit and vectors");
+            }
+
             chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
             if (chosen is null)
             {
