@@ -87,6 +87,11 @@ internal static class SweepCommand
 
         var text = new UTF8Encoding(false).GetString(bytes);
         var point = PointFor(path);
+        if (InputFiles.LoadReadout(path).Description is { Noise.CapturePath: not null } withCapture)
+        {
+            error.WriteLine($"{withCapture.LocationOf("noise.capture")}: note: sweeps use the parametric noise model at every point; noise.capture is applied by design, emit and vectors");
+        }
+
         ReadoutDescription? baseline = null;
         WeightScheme? chosen = null;
         if (target is not null || split)
@@ -98,11 +103,6 @@ internal static class SweepCommand
             }
 
             baseline = baseResult.Description;
-            if (baseline.Noise.CapturePath is not null)
-            {
-                error.WriteLine($"{baseline.LocationOf("noise.capture")}: note: sweeps use the parametric noise model at every point; noise.capture is applied by design, emit and vectors");
-            }
-
             chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
             if (chosen is null)
             {
