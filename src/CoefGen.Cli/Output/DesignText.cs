@@ -26,11 +26,11 @@ internal static class DesignText
         var a = d.Adc;
         var t = d.Timing;
         sb.Append("Readout\n");
-        sb.Append($"  ADC       {a.Bits} bits at {Eng.Si(a.RateHz, "S/s")}, {Eng.Num(a.FullScaleV)} V span (LSB {Eng.Si(a.LsbV, "V")}), {CodingWord(a.Coding)}, own noise {Eng.Num(a.NoiseLsb)} LSB rms\n");
-        sb.Append($"  sensor    {Eng.Num(d.Sensor.ConversionGainUvPerE)} uV/e- x gain {Eng.Num(d.Sensor.Gain)} = {Eng.Si(d.Sensor.VoltsAtAdcPerElectron, "V")}/e- at the ADC\n");
-        sb.Append($"  cycle     {t.PixelSamples} samples ({Eng.Si(t.PixelSamples / a.RateHz, "s")}), transfer at {Eng.Si(t.TransferTimeS, "s")}, step {StepWord(d)}\n");
-        sb.Append($"  reset     samples {t.Reset.Start}..{t.Reset.End - 1} ({t.Reset.Count}, {Eng.Si(t.Reset.Count / a.RateHz, "s")})\n");
-        sb.Append($"  signal    samples {t.Signal.Start}..{t.Signal.End - 1} ({t.Signal.Count}, {Eng.Si(t.Signal.Count / a.RateHz, "s")})\n");
+        sb.Append($"  ADC       {a.Bits} bits at {Eng.SiShort(a.RateHz, "S/s")}, {Eng.NumShort(a.FullScaleV)} V span (LSB {Eng.SiShort(a.LsbV, "V")}), {CodingWord(a.Coding)}, own noise {Eng.NumShort(a.NoiseLsb)} LSB rms\n");
+        sb.Append($"  sensor    {Eng.NumShort(d.Sensor.ConversionGainUvPerE)} uV/e- x gain {Eng.NumShort(d.Sensor.Gain)} = {Eng.SiShort(d.Sensor.VoltsAtAdcPerElectron, "V")}/e- at the ADC\n");
+        sb.Append($"  cycle     {t.PixelSamples} samples ({Eng.SiShort(t.PixelSamples / a.RateHz, "s")}), transfer at {Eng.SiShort(t.TransferTimeS, "s")}, step {StepWord(d)}\n");
+        sb.Append($"  reset     samples {t.Reset.Start}..{t.Reset.End - 1} ({t.Reset.Count}, {Eng.SiShort(t.Reset.Count / a.RateHz, "s")})\n");
+        sb.Append($"  signal    samples {t.Signal.Start}..{t.Signal.End - 1} ({t.Signal.Count}, {Eng.SiShort(t.Signal.Count / a.RateHz, "s")})\n");
         foreach (var line in t.Rounding)
         {
             sb.Append($"  rounding  {line}\n");
@@ -39,8 +39,8 @@ internal static class DesignText
         var n = d.Noise;
         foreach (var s in n.Sources)
         {
-            var flicker = s.FlickerCornerHz > 0 ? $", 1/f corner {Eng.Si(s.FlickerCornerHz, "Hz")} above {Eng.Si(s.LowCutoffHz, "Hz")}" : "";
-            sb.Append($"  noise     {s.Name} at the {(s.At == NoiseReference.Sensor ? "sensor" : "ADC")}: {Eng.Num(s.WhiteNvPerRtHz)} nV/rtHz{flicker}\n");
+            var flicker = s.FlickerCornerHz > 0 ? $", 1/f corner {Eng.SiShort(s.FlickerCornerHz, "Hz")} above {Eng.SiShort(s.LowCutoffHz, "Hz")}" : "";
+            sb.Append($"  noise     {s.Name} at the {(s.At == NoiseReference.Sensor ? "sensor" : "ADC")}: {Eng.NumShort(s.WhiteNvPerRtHz)} nV/rtHz{flicker}\n");
         }
 
         if (r.CaptureSource is not null)
@@ -50,18 +50,18 @@ internal static class DesignText
 
         if (n.Table is not null)
         {
-            sb.Append($"  noise     measured spectrum {n.Table.Name}: {n.Table.FrequencyHz.Count} points, {Eng.Si(n.Table.FrequencyHz[0], "Hz")} to {Eng.Si(n.Table.FrequencyHz[^1], "Hz")} (flat below, f^-2 above)\n");
+            sb.Append($"  noise     measured spectrum {n.Table.Name}: {n.Table.FrequencyHz.Count} points, {Eng.SiShort(n.Table.FrequencyHz[0], "Hz")} to {Eng.SiShort(n.Table.FrequencyHz[^1], "Hz")} (flat below, f^-2 above)\n");
         }
 
         var shaping = new List<string>();
         if (n.FrontEndPoleHz is double fp)
         {
-            shaping.Add($"front-end pole {Eng.Si(fp, "Hz")}");
+            shaping.Add($"front-end pole {Eng.SiShort(fp, "Hz")}");
         }
 
         if (n.BandwidthHz is double fb)
         {
-            shaping.Add($"brick-wall bandwidth {Eng.Si(fb, "Hz")}");
+            shaping.Add($"brick-wall bandwidth {Eng.SiShort(fb, "Hz")}");
         }
 
         if (shaping.Count > 0)
@@ -114,7 +114,7 @@ internal static class DesignText
     };
 
     private static string StepWord(ReadoutDescription d) =>
-        d.Timing.Step == StepModel.Pole && d.Noise.FrontEndPoleHz is double fp ? $"settles through the {Eng.Si(fp, "Hz")} pole" : "ideal";
+        d.Timing.Step == StepModel.Pole && d.Noise.FrontEndPoleHz is double fp ? $"settles through the {Eng.SiShort(fp, "Hz")} pole" : "ideal";
 
     internal static string RoundingWord(RoundingMode m) => m switch
     {

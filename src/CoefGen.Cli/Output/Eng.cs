@@ -55,6 +55,22 @@ internal static class Eng
             .ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
     }
 
+    /// <summary>Like <see cref="Si"/> but without trailing zeros ("20 MS/s", "2.5 MHz"), for prose lines.</summary>
+    public static string SiShort(double value, string unit, int significant = 4)
+    {
+        var text = Si(value, unit, significant);
+        var space = text.IndexOf(' ', StringComparison.Ordinal);
+        return space < 0 ? text : Trim(text[..space]) + text[space..];
+    }
+
+    /// <summary>Like <see cref="Num"/> but without trailing zeros, for prose lines.</summary>
+    public static string NumShort(double value, int significant = 4) => Trim(Num(value, significant));
+
+    private static string Trim(string number) =>
+        number.Contains('.', StringComparison.Ordinal) && !number.Contains('E', StringComparison.Ordinal)
+            ? number.TrimEnd('0').TrimEnd('.')
+            : number;
+
     public static string Int(long value) => value.ToString(CultureInfo.InvariantCulture);
 
     public static string Int(System.Numerics.BigInteger value) => value.ToString(CultureInfo.InvariantCulture);
