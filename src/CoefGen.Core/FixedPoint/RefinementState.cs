@@ -20,12 +20,16 @@ internal sealed class RefinementState
         _step = step;
         var n = c.Length;
         G = new double[n];
+        var lag = r.TotalLag;
+        var index = r.SampleIndex;
         for (var i = 0; i < n; i++)
         {
-            var acc = 0.0;
+            // Exact O(N^2) product over the lag table (no FFT: the moves compare changes of order 1e-12 of q).
+            var acc = r.DigitalVarianceV2 * c[i];
+            var ni = index[i];
             for (var j = 0; j < n; j++)
             {
-                acc += r.At(i, j) * c[j];
+                acc += lag[Math.Abs(index[j] - ni)] * c[j];
             }
 
             G[i] = acc;
@@ -54,9 +58,16 @@ internal sealed class RefinementState
         _gain += _step[up] - _step[down];
         C[up]++;
         C[down]--;
+        var lag = _r.TotalLag;
+        var index = _r.SampleIndex;
+        var nu = index[up];
+        var nd = index[down];
         for (var k = 0; k < C.Length; k++)
         {
-            G[k] += _r.At(k, up) - _r.At(k, down);
+            G[k] += lag[Math.Abs(index[k] - nu)] - lag[Math.Abs(index[k] - nd)];
         }
+
+        G[up] += _r.DigitalVarianceV2;
+        G[down] -= _r.DigitalVarianceV2;
     }
 }
