@@ -1,0 +1,124 @@
+using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Tests.Vectors;
+using CoefGen.Core.Vectors;
+
+namespace CoefGen.Core.Tests.Toolchain;
+
+/// <summary>
+/// The reference datapath (Verilog in Icarus, VHDL in GHDL) matches the bit-exact model on designs built to
+/// reach the branches the shipped examples never take: an output a few ADU wide (every charge and rail pixel
+/// saturates), a shift of 1..3 bits after the accumulator (exact rounding ties are common), every rounding
+/// mode, a wrapping accumulator at the narrowest width the resolver accepts and a saturating one a bit below its
+/// proven partial-sum width (the proof says unsafe, the generator still writes vectors, and the sums really wrap or clip), both ADC codings and the
+/// post-multiplier. Each test also asserts from the expected data that its branches really occurred.
+/// </summary>
+public class ReferenceDatapathEdgeToolchainTests
+{
+    private const string Fast = "fast_imaging.toml";
+    private const string Slow = "slowscan_spectro.toml";
+
+    // Offset binary (fast) and two's complement (slow); every rounding mode with both accumulators; two post-multiplier designs.
+    private static readonly Dictionary<string, EdgeVariant> Variants = new(StringComparer.Ordinal)
+    {
+        ["fast_half_up_wrap_narrow"] = new(Fast, "half-up", "wrap", false, 1, 0, 4, true, false),
+        ["fast_half_even_saturate_narrow"] = new(Fast, "half-even", "saturate", false, 1, 0, 4, true, true),
+        ["fast_truncate_saturate"] = new(Fast, "truncate", "saturate", false, 2, 0, 5, false, false),
+        ["slow_half_up_saturate_narrow"] = new(Slow, "half-up", "saturate", false, 2, 0, 5, true, true),
+        ["slow_half_even_wrap_narrow"] = new(Slow, "half-even", "wrap", false, 1, 0, 5, true, false),
+        ["slow_truncate_wrap"] = new(Slow, "truncate", "wrap", false, 3, 0, 5, false, false),
+        ["slow_exact_half_up_saturate_narrow"] = new(Slow, "half-up", "saturate", true, 0, 2, 6, true, true),
+        ["fast_exact_half_even_wrap"] = new(Fast, "half-even", "wrap", true, 0, 3, 5, false, false),
+    };
+
+    public static TheoryData<string> Names => [.. Variants.Keys];
+
+    [Theory]
+    [MemberData(nameof(Names))]
+    public void Reference_datapath_matches_the_model_through_output_saturation_rounding_ties_and_accumulator_limits(string variant)
+    {
+        var v = Variants[variant];
+        var baseline = ExampleDesigns.Load(v.Example).Datapath;
+        var r = ExampleDesigns.FromText(v.Toml(baseline.P, baseline.CoefBits, baseline.AdcBits, PartialSumBits(baseline)), "edge_" + variant + ".toml");
+        var d = r.Datapath;
+        AssertResolved(v, baseline, d);
+
+        using var dir = new TempDir();
+        var prefix = ReferenceBench.Write(dir, r, EdgeVariant.IcarusPixels);
+        var set = GoldenVectorGenerator.Generate(r, new VectorOptions(EdgeVariant.IcarusPixels, Seed: 11));
+        var (written, diags) = ExpectedOutputs.Parse(File.ReadAllText(Path.Combine(dir.Path, VectorFileNames.ExpectedDecimal)), "expected.txt", set.Pixels.Count);
+        Assert.Empty(diags);
+        Assert.Equal(set.Pixels.Select(p => p.Expected.Output), written!);
+
+        var all = EdgeBranchCounts.Of(d, set.Pixels);
+        TestContext.Current.TestOutputHelper?.WriteLine($"{v}: P {d.P}, shift {d.Shift}, M {d.PostMultiplier}, out {d.OutputBits}.{d.OutputFracBits}, acc {d.AccBits}, safe {d.Proof.Safe}: {all}");
+        AssertBranchesOccur(v, all);
+        ReferenceBench.AssertPass(ReferenceBench.Icarus(dir, prefix), EdgeVariant.IcarusPixels);
+
+        if (v.Ghdl)
+        {
+            var first = EdgeBranchCounts.Of(d, set.Pixels.Take(EdgeVariant.GhdlPixels).ToArray());
+            TestContext.Current.TestOutputHelper?.WriteLine($"first {EdgeVariant.GhdlPixels} (GHDL): {first}");
+            Assert.True(first.OutputHigh > 0 && first.OutputLow > 0, first.ToString());
+            Assert.True(!v.NarrowAccumulator || first.AccumulatorWrapped > 0, first.ToString());
+            ReferenceBench.AssertPass(ReferenceBench.Ghdl(dir, prefix, EdgeVariant.GhdlPixels), EdgeVariant.GhdlPixels);
+        }
+    }
+
+    /// <summary>The resolver accepted every override as written and the design has the intended shape.</summary>
+    private static void AssertResolved(EdgeVariant v, IntegerDesign baseline, IntegerDesign d)
+    {
+        Assert.Equal(ModeNames.ParseRounding(v.Rounding), d.Rounding);
+        Assert.Equal(ModeNames.ParseAccumulator(v.Accumulator), d.Accumulator);
+        Assert.Equal(v.Exact ? NormalizeMode.Exact : NormalizeMode.Shift, d.Normalize);
+        Assert.Equal(d.OutputFracBits + v.OutputRangeAdu + 1, d.OutputBits);
+        var narrow = d.Accumulator == AccumulatorMode.Wrap ? d.CoefBits + d.SampleBits : PartialSumBits(baseline) - 1;
+        Assert.Equal(v.NarrowAccumulator ? narrow : baseline.AccBits, d.AccBits);
+        if (v.Exact)
+        {
+            Assert.Equal(v.OutputFracBits, d.OutputFracBits);
+            Assert.True(d.PostMultiplierBits > 0 && d.PostMultiplier > 1, $"M = {d.PostMultiplier}");
+        }
+        else
+        {
+            // P depends only on the weights and the coefficient width, so the shift is the one asked for.
+            Assert.Equal(baseline.P, d.P);
+            Assert.Equal(v.Shift, d.Shift);
+            Assert.Equal(1, d.PostMultiplier);
+        }
+
+        // The narrow accumulator is below what the proof needs; the pipeline and the generator still go ahead.
+        Assert.Equal(!v.NarrowAccumulator, d.Proof.Checks.Where(c => c.Name.StartsWith("accumulator", StringComparison.Ordinal)).All(c => c.Fits));
+        if (v.NarrowAccumulator && (d.Accumulator == AccumulatorMode.Saturate || d.Proof.Checks.Single(c => c.Name == "accumulator_final").Required))
+        {
+            Assert.False(d.Proof.Safe);
+        }
+    }
+
+    private static int PartialSumBits(IntegerDesign d) => d.Proof.Checks.Single(c => c.Name == "accumulator_partial").RequiredBits;
+
+    private static void AssertBranchesOccur(EdgeVariant v, EdgeBranchCounts n)
+    {
+        var text = v + ": " + n;
+        Assert.True(n.OutputHigh > 0 && n.OutputLow > 0, "both output rails: " + text);
+        Assert.True(n.OutputHigh + n.OutputLow < n.Pixels / 2, "most noise pixels inside the output range: " + text);
+        if (!v.Exact)
+        {
+            // Ties both ways: odd and even truncated quotient (half-even), negative and positive (half-up, truncate).
+            Assert.True(n.TiesOddQuotient > 0 && n.Ties - n.TiesOddQuotient > 0, "ties with odd and even quotient: " + text);
+            Assert.True(n.NegativeTies > 0 && n.Ties - n.NegativeTies > 0, "negative and positive ties: " + text);
+        }
+
+        if (!v.NarrowAccumulator)
+        {
+            Assert.True(n.AccumulatorWrapped == 0 && n.AccumulatorClipped == 0, "a full-width accumulator is exact: " + text);
+        }
+        else if (v.Accumulator == "saturate")
+        {
+            Assert.True(n.AccumulatorClipped > 0, "the saturating accumulator clipped: " + text);
+        }
+        else
+        {
+            Assert.True(n.AccumulatorWrapped > 0 && n.AccumulatorClipped == 0, "the wrapping accumulator wrapped: " + text);
+        }
+    }
+}
