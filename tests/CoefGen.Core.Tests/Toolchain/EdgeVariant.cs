@@ -12,8 +12,9 @@ namespace CoefGen.Core.Tests.Toolchain;
 /// <param name="Rounding">half-up, half-even or truncate.</param>
 /// <param name="Accumulator">wrap or saturate.</param>
 /// <param name="Exact">normalize = "exact" (post-multiplier) instead of "shift".</param>
-/// <param name="Shift">For normalize = shift: the wanted right shift, so output_frac_bits = P - Shift and a tie needs only Shift low bits.</param>
-/// <param name="OutputFracBits">For normalize = exact: the output fraction bits.</param>
+/// <param name="FracBelowP">output_frac_bits = P - this. For normalize = shift it is the right shift, so a tie needs only this many
+/// low bits; for normalize = exact a negative value gives a shift of a few bits after the post-multiplier (a tie then needs
+/// a shift above the trailing zero bits of M).</param>
 /// <param name="OutputRangeAdu">output_bits = frac bits + this + 1: the output holds +-2^this ADU, far below a full-scale charge.</param>
 /// <param name="NarrowAccumulator">
 /// An accumulator below what the proof needs. Wrap: coef_bits + ADC bits, the narrowest the resolver accepts (the
@@ -22,22 +23,26 @@ namespace CoefGen.Core.Tests.Toolchain;
 /// DC offset alone clips every pixel).
 /// </param>
 /// <param name="Ghdl">Also simulate in GHDL (on the first <see cref="EdgeVariant.GhdlPixels"/> pixels).</param>
+/// <param name="CoefBits">coef_bits, or null for the example's. At 18 bits the integer gain is 2^P to 17 bits, so the
+/// post-multiplier comes out a power of two (a plain shift); at 10 bits it does not.</param>
 public sealed record EdgeVariant(
-    string Example, string Rounding, string Accumulator, bool Exact, int Shift, int OutputFracBits, int OutputRangeAdu, bool NarrowAccumulator, bool Ghdl)
+    string Example, string Rounding, string Accumulator, bool Exact, int FracBelowP, int OutputRangeAdu, bool NarrowAccumulator, bool Ghdl, int? CoefBits = null)
 {
     public const int IcarusPixels = 300;
 
     public const int GhdlPixels = 50;
 
-    /// <summary>The example's text with a new [fixed_point] section (same target and coefficient width).</summary>
-    /// <param name="p">The example's coefficient scale P.</param>
-    /// <param name="coefBits">The example's coefficient width.</param>
-    /// <param name="adcBits">The ADC width.</param>
-    /// <param name="partialSumBits">The example's proven partial-sum width.</param>
+    /// <summary>
+    /// The example's text with a new [fixed_point] section (same target). P and the proven partial-sum width do not
+    /// depend on the output or accumulator settings, so they come from a probe run of the same variant
+    /// (<see cref="ProbeToml"/>); <paramref name="coefBits"/> is the example's width when <see cref="CoefBits"/> is null.
+    /// </summary>
     public string Toml(int p, int coefBits, int adcBits, int partialSumBits)
     {
-        var frac = Exact ? OutputFracBits : p - Shift;
+        var frac = p - FracBelowP;
+        coefBits = CoefBits ?? coefBits;
         var text = File.ReadAllText(ExampleDesigns.ExamplePath(Example));
+
         var target = Regex.Match(text, "(?m)^target = \"([^\"]+)\"").Groups[1].Value;
         List<string> lines =
         [
@@ -50,7 +55,7 @@ public sealed record EdgeVariant(
             Line("output_frac_bits", frac),
             Line("output_bits", frac + OutputRangeAdu + 1),
         ];
-        if (NarrowAccumulator)
+        if (NarrowAccumulator && partialSumBits > 0)
         {
             lines.Add(Line("acc_bits", Accumulator == "wrap" ? coefBits + adcBits : partialSumBits - 1));
         }
@@ -60,8 +65,11 @@ public sealed record EdgeVariant(
         return edited;
     }
 
+    /// <summary>The variant with a full-width accumulator and a valid fraction width, to learn P and the partial-sum width.</summary>
+    public string ProbeToml(int coefBits, int adcBits) => Toml(Math.Max(FracBelowP, 0), coefBits, adcBits, 0);
+
     public override string ToString() =>
-        $"{Path.GetFileNameWithoutExtension(Example)} {Rounding} {Accumulator}{(NarrowAccumulator ? "(narrow)" : "")} {(Exact ? "exact" : "shift " + Shift.ToString(CultureInfo.InvariantCulture))}";
+        $"{Path.GetFileNameWithoutExtension(Example)} {Rounding} {Accumulator}{(NarrowAccumulator ? "(narrow)" : "")} {(Exact ? "exact" : "shift")} frac P{(-FracBelowP).ToString("+0;-0", CultureInfo.InvariantCulture)}{(CoefBits is int b ? " coef " + b.ToString(CultureInfo.InvariantCulture) : "")}";
 
     private static string Line(string key, int value) => key + " = " + value.ToString(CultureInfo.InvariantCulture);
 }
