@@ -18,7 +18,7 @@ namespace CoefGen.Core.Tests.Toolchain;
 /// <param name="OutputRangeAdu">output_bits = frac bits + this + 1: the output holds +-2^this ADU, far below a full-scale charge.</param>
 /// <param name="NarrowAccumulator">
 /// An accumulator below what the proof needs. Wrap: coef_bits + ADC bits, the narrowest the resolver accepts (the
-/// partial sums wrap on every pixel, the final one only on rail patterns). Saturate: one bit below the proof's
+/// partial sums wrap on every pixel, the final one on rail and full-charge patterns). Saturate: one bit below the proof's
 /// partial-sum width, so rail and full-charge pixels clip and noise pixels do not (at the narrowest width the
 /// DC offset alone clips every pixel).
 /// </param>
