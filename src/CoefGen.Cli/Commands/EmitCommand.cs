@@ -16,13 +16,15 @@ internal static class EmitCommand
             AllowMultipleArgumentsPerToken = true,
         };
         var template = new Option<FileInfo?>("--template") { Description = "Render your own Scriban template (see templates/README.md for the model)." };
+        var allowUnsafe = new Option<bool>("--allow-unsafe") { Description = "Write the tables even when the width proof says the datapath can overflow (a warning is printed)." };
         var templateOut = new Option<string?>("--template-out") { Description = "Output name for --template (default: the template's name without its last extension)." };
         var cmd = new Command(
             "emit",
             "Render the chosen scheme's integer design through the templates and write each file atomically " +
-            "(temporary file, then rename). Nothing is written when any template or path fails. Exit 2 on bad input.")
+            "(temporary file, then rename). Nothing is written when any template or path fails, or when the width proof says the " +
+            "datapath can overflow (unless --allow-unsafe). Exit 2 on bad input.")
         {
-            file, outDir, formats, template, templateOut,
+            file, outDir, formats, template, templateOut, allowUnsafe,
         };
         cmd.SetAction(parse =>
         {
@@ -31,6 +33,11 @@ internal static class EmitCommand
             if (result is null)
             {
                 return ExitCodes.BadInput;
+            }
+
+            if (UnsafeDesign.Refuse(result, parse.GetValue(allowUnsafe), error) is int refused)
+            {
+                return refused;
             }
 
             var entries = ArtefactPlan.Entries(result, parse.GetValue(formats) ?? [], parse.GetValue(template)?.ToString(), parse.GetValue(templateOut));

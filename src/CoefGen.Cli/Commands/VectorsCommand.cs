@@ -40,6 +40,12 @@ internal static class VectorsCommand
                 return ExitCodes.BadInput;
             }
 
+            if (!result.Datapath.Proof.Safe)
+            {
+                // Vectors of an unsafe design are still useful (they exercise overflow in the DUT); say so plainly.
+                DiagnosticPrinter.Print(error, [UnsafeDesign.Describe(result, asError: false)]);
+            }
+
             if (result.Datapath.Coefficients.Count > CorrelatedNoiseSampler.MaxSamples)
             {
                 return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(VectorCodes.TooManySamples, SourceLocation.FileOnly(path),

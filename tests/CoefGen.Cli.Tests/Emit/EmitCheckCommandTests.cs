@@ -83,3 +83,49 @@ public class EmitCheckCommandTests
         Assert.False(File.Exists(Path.Combine(dir, "tile7_v3_coefs_pkg.sv")), "nothing may be written when one entry is refused");
     }
 }
+
+public class UnsafeDesignTests
+{
+    private static string UnsafeCopy()
+    {
+        var dir = RepoPaths.TempDir();
+        // An 8-bit output cannot hold the +-2^13 ADU range of a 14-bit ADC: the width proof says NOT SAFE.
+        var text = File.ReadAllText(RepoPaths.Example("fast_imaging.toml"))
+            .Replace("accumulator = \"saturate\"", "accumulator = \"saturate\"\noutput_bits = 8", StringComparison.Ordinal);
+        var path = Path.Combine(dir, "unsafe.toml");
+        File.WriteAllText(path, text);
+        return path;
+    }
+
+    [Fact]
+    public void Emit_refuses_an_unsafe_design_and_writes_nothing_unless_allowed()
+    {
+        var path = UnsafeCopy();
+        var dir = Path.GetDirectoryName(path)!;
+        var design = CliRunner.Run("design", path);
+        Assert.Equal(0, design.ExitCode);
+        Assert.Contains("NOT SAFE", design.Output, StringComparison.Ordinal);
+
+        var refused = CliRunner.Run("emit", path);
+        Assert.Equal(2, refused.ExitCode);
+        Assert.Contains("CG2020", refused.Error, StringComparison.Ordinal);
+        Assert.Contains("output needs", refused.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain(Directory.GetFiles(dir), f => !f.EndsWith(".toml", StringComparison.Ordinal));
+
+        var allowed = CliRunner.Run("emit", path, "--allow-unsafe");
+        Assert.Equal(0, allowed.ExitCode);
+        Assert.Contains("warning CG2020", allowed.Error, StringComparison.Ordinal);
+        Assert.True(File.Exists(Path.Combine(dir, "tile7_v3_coefs.vh")));
+    }
+
+    [Fact]
+    public void Vectors_of_an_unsafe_design_are_written_with_a_warning()
+    {
+        var path = UnsafeCopy();
+        var outDir = Path.Combine(Path.GetDirectoryName(path)!, "vec");
+        var r = CliRunner.Run("vectors", path, "--out", outDir, "--pixels", "20", "--no-rtl");
+        Assert.Equal(0, r.ExitCode);
+        Assert.Contains("warning CG2020", r.Error, StringComparison.Ordinal);
+        Assert.True(File.Exists(Path.Combine(outDir, "manifest.json")));
+    }
+}
