@@ -20,7 +20,7 @@ internal static class ArtefactPlan
     /// <summary>Entries to render: explicit formats and template override the file's [[emit]] list.</summary>
     public static IReadOnlyList<(string Template, string OutputPath)> Entries(DesignResult r, IReadOnlyList<string> formats, string? template, string? templateOut)
     {
-        var prefix = TemplateModel.Create(r.Datapath, ProvenanceOf(r)).Prefix;
+        var prefix = IdentifierPrefix.FromName(r.Datapath.Name);
         var list = new List<(string, string)>();
         foreach (var f in formats)
         {

@@ -101,10 +101,11 @@ public static class CaptureAnalysis
         var modelCovariance = result.FittedNoise.Sample(grid);
         var covariance = CaptureCovariance.Estimate(capture, designRows, grid, d.Adc.LsbV, Dense(modelCovariance));
         var rejectDrift = d.Weights.RejectDrift;
+        var shaped = ShapedWeights.Compute(grid, d.Weights);
         var schemes = new List<(string Label, double[] H)>
         {
             ("boxcar", BoxcarWeights.Compute(grid, rejectDrift).H),
-            (ShapedWeights.Compute(grid, d.Weights).Label, ShapedWeights.Compute(grid, d.Weights).H),
+            (shaped.Label, shaped.H),
         };
         try
         {
