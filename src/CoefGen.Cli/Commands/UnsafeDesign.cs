@@ -1,3 +1,4 @@
+using System.CommandLine;
 using CoefGen.Cli.Io;
 using CoefGen.Core.Diagnostics;
 using CoefGen.Core.Pipeline;
@@ -35,5 +36,22 @@ internal static class UnsafeDesign
         }
 
         return DiagnosticPrinter.PrintFailure(error, [Describe(r, asError: true)]);
+    }
+
+    /// <summary>`--require-safe` of design and report: exit 1 after the output when the proof rejects the design.</summary>
+    public static Option<bool> RequireSafeOption() =>
+        new("--require-safe") { Description = "Exit 1 (after writing the output) when the width proof says the integer datapath can overflow." };
+
+    /// <summary>With --require-safe and an unsafe design: prints CG2020 as an error and returns 1; otherwise null.</summary>
+    public static int? RequireSafe(DesignResult r, bool required, TextWriter error)
+    {
+        if (!required || r.Datapath.Proof.Safe)
+        {
+            return null;
+        }
+
+        var d = Describe(r, asError: false);
+        DiagnosticPrinter.Print(error, [Diagnostic.Error(d.Code, d.Location, d.Message + " (--require-safe)")]);
+        return ExitCodes.Difference;
     }
 }

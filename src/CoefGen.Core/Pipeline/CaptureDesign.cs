@@ -36,9 +36,17 @@ public static class CaptureDesign
             Predictions = predictions,
             Datapath = datapath,
             CaptureSource = $"{capture.SourcePath}: {source}",
+            CaptureSpectrum = CaptureSpectrum(capture, d),
             OptimalSolver = "dense null-space on the capture covariance",
             Warnings = [.. model.Warnings.Where(w => w.Code != "CG1309")],
         };
+    }
+
+    private static WelchSpectrum? CaptureSpectrum(SampleCapture capture, ReadoutDescription d)
+    {
+        var record = CaptureSamples.ResidualStream(capture, d.Adc.LsbV);
+        var segment = WelchEstimator.DefaultSegmentLength(record.Length);
+        return segment * 2 <= record.Length ? WelchEstimator.Estimate(record, d.Adc.RateHz, segment) : null;
     }
 
     private static NoisePrediction Predict(WeightSet w, CaptureCovariance c, ReadoutDescription d, string source)

@@ -35,6 +35,9 @@ public sealed record DesignResult
     /// <summary>When the noise comes from a capture (noise.capture): the file and how its covariance was formed; null otherwise.</summary>
     public string? CaptureSource { get; init; }
 
+    /// <summary>The Welch spectrum of the capture's residual stream when the design uses noise.capture (shown in the report).</summary>
+    public Capture.WelchSpectrum? CaptureSpectrum { get; init; }
+
     /// <summary>Warnings from every stage.</summary>
     public required IReadOnlyList<Diagnostic> Warnings { get; init; }
 
