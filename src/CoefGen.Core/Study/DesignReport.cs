@@ -258,7 +258,7 @@ public static class DesignReport
             new[] { T("output fraction bits"), ReportCell.Number("fixed_point.output_frac_bits", i.OutputFracBits) },
             new[] { T("coefficient scale P"), ReportCell.Number("fixed_point.p", i.P) },
             new[] { T("shift S"), ReportCell.Number("fixed_point.shift", i.Shift) },
-            new[] { T("post-multiplier M"), ReportCell.Verbatim(I(i.PostMultiplier), "fixed_point.post_multiplier") },
+            new[] { T("post-multiplier M"), new ReportCell(I(i.PostMultiplier), "fixed_point.post_multiplier", i.PostMultiplier, Raw: true) },
             new[] { T("gain error"), ReportCell.With("fixed_point.gain_error_ppm", i.GainErrorPpm, "ppm") },
             new[] { T("noise penalty of the integer coefficients"), ReportCell.With("fixed_point.noise_penalty_percent", i.NoisePenaltyPercent, "%") },
             new[] { T("predicted noise"), ReportCell.With("fixed_point.predicted_noise_output_lsb", i.PredictedNoiseOutputLsb, "output LSB rms") },

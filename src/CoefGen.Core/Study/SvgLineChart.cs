@@ -110,7 +110,7 @@ public sealed class SvgLineChart
         sb.Append($"<text transform=\"translate(14 {C(Top + (ph / 2))}) rotate(-90)\" text-anchor=\"middle\">{Esc(YLabel)}</text>\n");
         if (Y2Label is not null)
         {
-            sb.Append($"<text transform=\"translate({C(Width - 10)} {C(Top + (ph / 2))}) rotate(90)\" text-anchor=\"middle\">{Esc(Y2Label)}</text>\n");
+            sb.Append($"<text transform=\"translate({C(Width - 18)} {C(Top + (ph / 2))}) rotate(90)\" text-anchor=\"middle\">{Esc(Y2Label)}</text>\n");
         }
 
         foreach (var m in Markers)
