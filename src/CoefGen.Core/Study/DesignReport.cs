@@ -220,7 +220,7 @@ public static class DesignReport
         var k = r.Noise.Components.ToList().FindIndex(c => c.Name == source);
         return k >= 0 ? ChartPalette.Source(k)
             : source.Contains("quantisation", StringComparison.Ordinal) ? ChartPalette.Digital
-            : source.Contains("ADC", StringComparison.Ordinal) ? new ChartStyle("#4f4f4f", "1 2")
+            : source.Contains("ADC", StringComparison.Ordinal) ? ChartPalette.AdcNoise
             : position == 0 ? ChartPalette.Total : ChartPalette.Source(position);
     }
 
