@@ -128,20 +128,31 @@ internal static class SweepCommand
 
         var targetResult = target is double x ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
         var splitResult = split ? PixelSplitSearch.Run(text, baseline!, point, chosen!.Value) : null;
+        var wrote = new List<string>();
         if (sweep is not null && csvPath is not null)
         {
             AtomicFile.WriteAllText(csvPath, SweepCsv.Render(sweep));
+            wrote.Add($"wrote {csvPath} ({sweep.Points.Count.ToString(CultureInfo.InvariantCulture)} points, one row each)");
         }
 
         if (sweep is not null && plotPath is not null)
         {
             AtomicFile.WriteAllText(plotPath, SweepPlot.Render(sweep));
+            wrote.Add($"wrote {plotPath} (read noise against {sweep.Axes[0].Key})");
         }
+
+        // With --json stdout is one document, so the file notes go to stderr.
+        foreach (var line in wrote)
+        {
+            (json ? error : output).WriteLine(line);
+        }
+
+        var noneValid = sweep is not null && sweep.Points.All(p => !p.Outcome.Valid);
 
         if (json)
         {
             output.Write(SweepJson.Render(sweep, targetResult, splitResult));
-            return ExitCodes.Ok;
+            return NoneValid(noneValid, error);
         }
 
         var parts = new List<string>();
@@ -161,7 +172,18 @@ internal static class SweepCommand
         }
 
         output.Write(string.Join("\n", parts));
-        return ExitCodes.Ok;
+        return NoneValid(noneValid, error);
+    }
+
+    private static int NoneValid(bool noneValid, TextWriter error)
+    {
+        if (!noneValid)
+        {
+            return ExitCodes.Ok;
+        }
+
+        error.WriteLine("error: no point of the sweep is a valid readout (each point's diagnostics are listed with the table)");
+        return ExitCodes.BadInput;
     }
 
     private static WeightScheme? ParseScheme(string word) => word switch

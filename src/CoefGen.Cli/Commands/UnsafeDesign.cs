@@ -1,6 +1,7 @@
 using System.CommandLine;
 using CoefGen.Cli.Io;
 using CoefGen.Core.Diagnostics;
+using CoefGen.Core.FixedPoint;
 using CoefGen.Core.Pipeline;
 
 namespace CoefGen.Cli.Commands;
@@ -12,7 +13,7 @@ internal static class UnsafeDesign
     public static Diagnostic Describe(DesignResult r, bool asError)
     {
         var failed = r.Datapath.Proof.Checks.Where(c => c.Required && !c.Fits)
-            .Select(c => $"{c.Name.Replace('_', ' ')} needs {c.RequiredBits} bits, has {c.AvailableBits}");
+            .Select(c => $"{CheckLabel.Of(c.Name)} needs {c.RequiredBits} bits, has {c.AvailableBits}");
         var advice = r.Datapath.Proof.Advice.Count > 0 ? " Change: " + string.Join(" ", r.Datapath.Proof.Advice.Select(a => a.TrimEnd().EndsWith('.') ? a.TrimEnd() : a.TrimEnd() + ".")) : "";
         var message = $"the integer design is NOT SAFE for every input in the ADC range ({string.Join("; ", failed)}).{advice}";
         var location = r.Description.LocationOf("fixed_point");

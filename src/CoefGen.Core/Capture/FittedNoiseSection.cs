@@ -18,7 +18,7 @@ public static class FittedNoiseSection
         ArgumentNullException.ThrowIfNull(analysis);
         var fit = analysis.Fit;
         var w = new StringBuilder("[noise]\n");
-        w.Append("front_end_pole_hz = ").Append(Num(fit.Model.PoleHz)).Append('\n');
+        w.Append("front_end_pole_hz = ").Append(Hz(fit.Model.PoleHz)).Append('\n');
         if (description.Noise.CapturePath is { } capture)
         {
             w.Append("capture = \"").Append(capture.Replace("\\", "\\\\", StringComparison.Ordinal).Replace("\"", "\\\"", StringComparison.Ordinal)).Append("\"\n");
@@ -28,10 +28,13 @@ public static class FittedNoiseSection
         w.Append("name = \"").Append(CaptureAnalysis.FittedSourceName).Append("\"\n");
         w.Append("at = \"adc\"\n");
         w.Append("white_nv_per_rthz = ").Append(Num(fit.WhiteNvPerRtHz)).Append('\n');
-        w.Append("flicker_corner_hz = ").Append(Num(fit.Model.FlickerCornerHz)).Append('\n');
-        w.Append("low_cutoff_hz = ").Append(Num(analysis.LowCutoffHz)).Append('\n');
+        w.Append("flicker_corner_hz = ").Append(Hz(fit.Model.FlickerCornerHz)).Append('\n');
+        w.Append("low_cutoff_hz = ").Append(Hz(analysis.LowCutoffHz)).Append('\n');
         return w.ToString();
     }
+
+    /// <summary>A frequency in the readout style, an SI string such as "1.51 MHz" (the loader reads it back).</summary>
+    private static string Hz(double v) => "\"" + Formatting.Human.SiShort(v, "Hz") + "\"";
 
     private static string Num(double v)
     {
