@@ -25,6 +25,28 @@ internal static class CliApp
     {
         var root = BuildRoot(output, error);
         var parse = root.Parse(args);
+        if (parse.Errors.Count > 0)
+        {
+            // A usage mistake is bad input: name it briefly (with the parser's did-you-mean) instead of printing the whole help.
+            foreach (var e in parse.Errors)
+            {
+                error.WriteLine($"error: {e.Message}");
+            }
+
+            var command = parse.CommandResult.Command;
+            var words = command.Subcommands.Select(c => c.Name).Concat(command.Options.SelectMany(o => o.Aliases.Prepend(o.Name))).ToList();
+            foreach (var token in parse.UnmatchedTokens)
+            {
+                if (Core.Readout.Loading.DidYouMean.Suggest(token, words) is string near)
+                {
+                    error.WriteLine($"did you mean '{near}' for '{token}'?");
+                }
+            }
+
+            error.WriteLine(command is RootCommand ? "usage: coefgen <command> ...; `coefgen --help` lists the commands" : $"usage: see `coefgen {command.Name} --help`");
+            return ExitCodes.BadInput;
+        }
+
         var config = new InvocationConfiguration { Output = output, Error = error };
         return parse.Invoke(config);
     }

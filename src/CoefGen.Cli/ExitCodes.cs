@@ -6,9 +6,9 @@ internal static class ExitCodes
     /// <summary>Success.</summary>
     public const int Ok = 0;
 
-    /// <summary>check/verify found a difference (or a command-line parse error, as System.CommandLine reports it).</summary>
+    /// <summary>check/verify found a difference; design/report --require-safe on a design the proof rejects.</summary>
     public const int Difference = 1;
 
-    /// <summary>Bad input: readout file, target, template, vector or dump problems.</summary>
+    /// <summary>Bad input: command-line usage, readout file, target, template, vector or dump problems.</summary>
     public const int BadInput = 2;
 }
