@@ -15,7 +15,7 @@ internal static class ReportHtml
     private const string Style =
         "body{font-family:sans-serif;margin:24px auto;max-width:1200px;padding:0 16px;color:#111;line-height:1.4}" +
         "h2{border-bottom:1px solid #ccc;padding-bottom:2px;margin-top:32px}" +
-        "table{border-collapse:collapse;margin:8px 0;max-width:100%}td,th{border:1px solid #bbb;padding:3px 8px;text-align:left;vertical-align:top;overflow-wrap:anywhere}" +
+        "table{border-collapse:collapse;margin:8px 0;max-width:100%}td,th{border:1px solid #bbb;padding:3px 8px;text-align:left;vertical-align:baseline;overflow-wrap:anywhere}" +
         "th{background:#f0f0f0}td[data-json]{text-align:right;white-space:nowrap}td.raw{font-family:monospace;font-size:90%}" +
         "pre{background:#f4f4f4;padding:8px;white-space:pre-wrap;overflow-wrap:anywhere;max-width:100%}" +
         "figure{margin:16px 0}figure svg{display:block}figcaption{font-size:90%;color:#444;max-width:860px}" +

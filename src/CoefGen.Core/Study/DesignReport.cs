@@ -237,7 +237,7 @@ public static class DesignReport
         };
         var lines = new List<string>
         {
-            $"x_k = {coding} of sample n_k, {I(i.SampleBits)}-bit signed; k = 1 .. {I(i.Coefficients.Count)}",
+            $"x_k = {coding} of sample n_k, {I(i.SampleBits)}-bit signed; k = 0 .. {I(i.Coefficients.Count - 1)}",
             $"acc = sum_k c_k * x_k   with c_k = round(h_k * 2^P), P = {I(i.P)}, {I(i.CoefBits)}-bit coefficients, {I(i.ProductBits)}-bit products,",
             $"      {I(i.AccBits)}-bit accumulator that {(i.Accumulator == AccumulatorMode.Wrap ? "wraps" : "saturates every partial sum")}",
         };
