@@ -80,20 +80,7 @@ internal static class ReportCharts
         {
             new()
             {
-                Svg = new SvgLineChart
-                {
-                    Title = r.CaptureSource is null ? "Noise spectrum at the ADC input" : "Noise spectrum of the data-sheet model at the ADC input",
-                    XLabel = "frequency",
-                    XUnit = "Hz",
-                    YLabel = "amplitude density at the ADC (nV/√Hz)",
-                    XLog = true,
-                    YLog = true,
-                    XMax = nyquist,
-                    YMin = FloorOf(series.SelectMany(s => s.Y), 1e-2),
-                    Y2Factor = gain != 1 && gain > 0 ? 1 / gain : null,
-                    Y2Label = gain != 1 && gain > 0 ? "referred to the sensor (nV/√Hz)" : null,
-                    Series = series,
-                }.Render(),
+                Svg = Spectrum(r.CaptureSource is null ? "Noise spectrum at the ADC input" : "Noise spectrum of the data-sheet model at the ADC input", series, nyquist, gain, FloorOf(series.SelectMany(s => s.Y), 1e-2)),
                 Caption = "One-sided amplitude density sqrt(S) of every noise component up to Nyquist" +
                     (gain != 1 && gain > 0 ? $"; the right axis divides by the gain to the ADC ({Human.NumShort(gain)}) to refer it to the sensor." : "; the gain to the ADC is 1, so the sensor sees the same density."),
             },
@@ -103,23 +90,10 @@ internal static class ReportCharts
             var model = welch.FrequencyHz.Select(x => r.Noise.Components.Sum(c => c.Psd(x)) + digital).ToArray();
             blocks.Add(new ReportBlock
             {
-                Svg = new SvgLineChart
-                {
-                    Title = "Measured spectrum of the capture at the ADC input",
-                    XLabel = "frequency",
-                    XUnit = "Hz",
-                    YLabel = "amplitude density at the ADC (nV/√Hz)",
-                    XLog = true,
-                    YLog = true,
-                    XMax = nyquist,
-                    Y2Factor = gain != 1 && gain > 0 ? 1 / gain : null,
-                    Y2Label = gain != 1 && gain > 0 ? "referred to the sensor (nV/√Hz)" : null,
-                    Series =
-                    [
-                        new ChartSeries($"capture (Welch, {Human.Whole(welch.Segments)} segments of {Human.Whole(welch.SegmentLength)})", welch.FrequencyHz, Nv(welch.PsdV2PerHz), Style: ChartPalette.Total),
-                        new ChartSeries("data-sheet model incl. quantisation + ADC noise", welch.FrequencyHz, Nv(model), Style: ChartPalette.Model),
-                    ],
-                }.Render(),
+                Svg = Spectrum("Measured spectrum of the capture at the ADC input", [
+                    new ChartSeries($"capture (Welch, {Human.Whole(welch.Segments)} segments of {Human.Whole(welch.SegmentLength)})", welch.FrequencyHz, Nv(welch.PsdV2PerHz), Style: ChartPalette.Total),
+                    new ChartSeries("data-sheet model incl. quantisation + ADC noise", welch.FrequencyHz, Nv(model), Style: ChartPalette.Model),
+                ], nyquist, gain, null),
                 Caption = "The spectrum the predictions rest on: the capture's residual stream (mean waveform removed) against the readout's data-sheet model.",
             });
         }
@@ -127,18 +101,8 @@ internal static class ReportCharts
         var peak = r.Weights.Max(w => f.Max(x => DesignReport.PowerResponse(w.H, r.Grid.TimeS, x)));
         blocks.Add(new ReportBlock
         {
-            Svg = new SvgLineChart
-            {
-                Title = "|H(f)|² of each scheme",
-                XLabel = "frequency",
-                XUnit = "Hz",
-                YLabel = "|H(f)|² (ADU² per ADU²)",
-                XLog = true,
-                YLog = true,
-                XMax = nyquist,
-                YMin = Math.Pow(10, Math.Floor(Math.Log10(peak * Floor))),
-                Series = [.. r.Weights.Select(w => new ChartSeries(w.Label, f, [.. f.Select(x => DesignReport.PowerResponse(w.H, r.Grid.TimeS, x))], Style: ChartPalette.Scheme(w.Scheme)))],
-            }.Render(),
+            Svg = Frequency("|H(f)|² of each scheme", "|H(f)|² (ADU² per ADU²)", [.. r.Weights.Select(w => new ChartSeries(w.Label, f, [.. f.Select(x => DesignReport.PowerResponse(w.H, r.Grid.TimeS, x))], Style: ChartPalette.Scheme(w.Scheme)))],
+                nyquist, Math.Pow(10, Math.Floor(Math.Log10(peak * Floor)))).Render(),
             Caption = "|H(f)|² = |sum_k h_k exp(-j 2 pi f t_k)|² over the same frequencies, shown down to 60 dB below its peak; the read noise variance is the integral of |H|² S over f plus the digital part.",
         });
         return new ReportSection("Spectra and transfer functions", blocks);
@@ -171,37 +135,39 @@ internal static class ReportCharts
         return new ReportSection("Where the noise comes from", [
             new ReportBlock
             {
-                Svg = new SvgLineChart
-                {
-                    Title = "Noise density at the output: |H(f)|² S(f)",
-                    XLabel = "frequency",
-                    XUnit = "Hz",
-                    YLabel = "output noise density (e-²/Hz)",
-                    XLog = true,
-                    YLog = true,
-                    XMax = rate / 2,
-                    YMin = Math.Pow(10, Math.Floor(Math.Log10(peak * Floor))),
-                    Series = density,
-                }.Render(),
+                Svg = Frequency("Noise density at the output: |H(f)|² S(f)", "output noise density (e-²/Hz)", density, rate / 2, Math.Pow(10, Math.Floor(Math.Log10(peak * Floor)))).Render(),
                 Caption = $"|H(f)|² times {source}, in electrons at the sensor; the area under each curve is that scheme's read noise variance.",
             },
             new ReportBlock
             {
-                Svg = new SvgLineChart
-                {
-                    Title = "Cumulative read noise variance against frequency",
-                    XLabel = "frequency",
-                    XUnit = "Hz",
-                    YLabel = "variance collected below f (% of the predicted total)",
-                    XLog = true,
-                    XMax = rate / 2,
-                    YMin = 0,
-                    Series = cumulative,
-                }.Render(),
+                Svg = Frequency("Cumulative read noise variance against frequency", "variance collected below f (% of the predicted total)", cumulative, rate / 2, 0, yLog: false).Render(),
                 Caption = "The running integral of |H|² S from 0 to f over each scheme's predicted variance: steep parts are the frequencies its noise comes from. " +
                     "What is missing at Nyquist lies above it (aliased analog noise) or is the difference between the spectrum and the sampled covariance.",
             },
         ]);
+    }
+
+    /// <summary>A log-frequency chart ending at Nyquist, SI ticks on the frequency axis.</summary>
+    private static SvgLineChart Frequency(string title, string yLabel, IReadOnlyList<ChartSeries> series, double nyquist, double? yMin, bool yLog = true, double? y2Factor = null, string? y2Label = null) => new()
+    {
+        Title = title,
+        XLabel = "frequency",
+        XUnit = "Hz",
+        YLabel = yLabel,
+        XLog = true,
+        YLog = yLog,
+        XMax = nyquist,
+        YMin = yMin,
+        Y2Factor = y2Factor,
+        Y2Label = y2Label,
+        Series = series,
+    };
+
+    /// <summary>An amplitude-density chart at the ADC, with the sensor-referred scale on the right when the gain is not 1.</summary>
+    private static string Spectrum(string title, IReadOnlyList<ChartSeries> series, double nyquist, double gain, double? yMin)
+    {
+        var refer = gain != 1 && gain > 0;
+        return Frequency(title, "amplitude density at the ADC (nV/√Hz)", series, nyquist, yMin, y2Factor: refer ? 1 / gain : null, y2Label: refer ? "referred to the sensor (nV/√Hz)" : null).Render();
     }
 
     private static IReadOnlyList<ChartBand> WindowBands(DesignResult r)
