@@ -77,6 +77,7 @@ public partial class TextFixTests
         Assert.True(r.ExitCode == 0, r.Error);
         Assert.Contains($"wrote {csv} (2 points", r.Output, StringComparison.Ordinal);
         Assert.Contains($"wrote {svg} (read noise against adc.rate_hz)", r.Output, StringComparison.Ordinal);
+        Assert.Contains(">40 MHz<", File.ReadAllText(svg), StringComparison.Ordinal); // the plot's ticks are in SI units too
         var json = CliRunner.Run("sweep", Fast, "--vary", "adc.rate_hz=40M,80M", "--csv", csv, "--json");
         using var _ = JsonDocument.Parse(json.Output); // stdout stays one JSON document
         Assert.Contains($"wrote {csv}", json.Error, StringComparison.Ordinal);

@@ -29,6 +29,7 @@ internal static class SweepPlot
         {
             Title = $"Read noise against {first.Key}",
             XLabel = SweepUnits.Label(first.Key),
+            XUnit = SweepUnits.TickUnit(first.Key),
             YLabel = "read noise (e- rms)",
             XLog = SvgLineChart.SpansDecade(first.Values),
             YLog = SvgLineChart.SpansDecade(ys),

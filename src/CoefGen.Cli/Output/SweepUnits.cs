@@ -34,4 +34,11 @@ internal static class SweepUnits
             _ => Eng.NumShort(value),
         };
     }
+
+    /// <summary>The unit chart ticks carry for a key ("Hz" gives ticks "40 MHz"), or null for plain numbers.</summary>
+    public static string? TickUnit(string key)
+    {
+        var leaf = key[(key.LastIndexOf('.') + 1)..];
+        return leaf.EndsWith("_hz", StringComparison.Ordinal) ? "Hz" : leaf.EndsWith("_v", StringComparison.Ordinal) ? "V" : null;
+    }
 }

@@ -91,6 +91,21 @@ public partial class ReportBrowserTests
     }
 
     [Fact]
+    public async Task The_report_of_an_unsafe_design_keeps_its_banner_and_advice_on_the_page()
+    {
+        var chromium = RequireChromium();
+        var html = ReportCommandTests.ReportOf(Emit.UnsafeDesignTests.UnsafeCopy(), out var dir);
+        Assert.Contains("What to change:", html, StringComparison.Ordinal);
+        var probed = Path.Combine(dir, "probe.html");
+        File.WriteAllText(probed, html.Replace("</body>", Probe + "</body>", StringComparison.Ordinal));
+        var (code, dom) = await Chromium(chromium, ["--dump-dom", $"--window-size={PageWidth},2400", new Uri(probed).AbsoluteUri]);
+        Assert.True(code == 0, dom);
+        var result = ProbeResult().Match(dom);
+        Assert.True(result.Success, "the probe did not run");
+        Assert.True(result.Groups[1].Value.Length == 0, WebUtility.HtmlDecode(result.Groups[1].Value));
+    }
+
+    [Fact]
     public async Task The_probe_finds_an_element_wider_than_the_page()
     {
         // Negative control: the same probe on a page with a 2000 px wide block and a chart label past its chart's edge.
