@@ -48,12 +48,12 @@ internal static class ReportHtml
     {
         if (b.Banner is not null)
         {
-            sb.Append($"<div class=\"banner {(b.Alarm ? "alarm" : "safe")}\" role=\"{(b.Alarm ? "alert" : "status")}\">{E(b.Banner)}</div>\n");
+            sb.Append($"<div class=\"banner {(b.Alarm ? "alarm" : "safe")}\" role=\"{(b.Alarm ? "alert" : "status")}\">{Code(b.Banner)}</div>\n");
         }
 
         if (b.Paragraph is not null)
         {
-            sb.Append($"<p>{E(b.Paragraph)}</p>\n");
+            sb.Append($"<p>{Code(b.Paragraph)}</p>\n");
         }
 
         if (b.Lines is not null)
@@ -104,6 +104,9 @@ internal static class ReportHtml
     }
 
     private static string E(string s) => WebUtility.HtmlEncode(s);
+
+    /// <summary>Escaped prose with `command` spans as code.</summary>
+    private static string Code(string s) => System.Text.RegularExpressions.Regex.Replace(E(s), "`([^`]+)`", "<code>$1</code>");
 
     /// <summary>A quantity's text for the page: "x 10^-9" as a superscript power, V^2 as V², rtHz as √Hz, u as µ.</summary>
     private static string Q(string s)
