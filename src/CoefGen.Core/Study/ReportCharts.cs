@@ -20,35 +20,38 @@ internal static class ReportCharts
         var bands = WindowBands(r);
         var markers = new[] { new ChartMarker(t.TransferTimeS, $"charge transfer {Human.SiShort(t.TransferTimeS, "s")}") };
         var cycle = t.PixelSamples / rate;
-        var weights = new SvgLineChart
+
+        // Both charts share the pixel-cycle time axis, the shaded windows and the transfer marker.
+        SvgLineChart OverCycle(string title, string description, string yLabel, IReadOnlyList<ChartSeries> series, double? yMin = null, double? yMax = null, double height = 400) => new()
         {
-            Title = "Weights over the pixel cycle",
-            Description = "Weight of each scheme at every weighted sample against time in the pixel cycle; the reset and signal windows are shaded, the charge transfer is a dashed line.",
+            Title = title,
+            Description = description,
             XLabel = "time from the start of the pixel cycle",
             XUnit = "s",
-            YLabel = "weight h (ADU per ADU)",
+            YLabel = yLabel,
             XMin = 0,
             XMax = cycle,
-            Series = [.. r.Weights.Select(w => new ChartSeries(w.Label, time, [.. w.H.Take(reset), double.NaN, .. w.H.Skip(reset)], Style: ChartPalette.Scheme(w.Scheme)))],
+            YMin = yMin,
+            YMax = yMax,
+            Height = height,
+            Series = series,
             Bands = bands,
             Markers = markers,
-        }.Render();
-        var step = new SvgLineChart
-        {
-            Title = "Step response seen by the weighted samples",
-            Description = "Fraction of the charge step that each weighted sample sees (0 before the transfer), against time in the pixel cycle.",
-            XLabel = "time from the start of the pixel cycle",
-            XUnit = "s",
-            YLabel = "step response",
-            XMin = 0,
-            XMax = cycle,
-            YMin = -0.05,
-            YMax = 1.2,
-            Height = 280,
-            Series = [new ChartSeries($"step response as a fraction of the final value ({(t.Step == Readout.StepModel.Pole ? "through the front-end pole" : "ideal step")})", time, [.. g.Step.Take(reset), double.NaN, .. g.Step.Skip(reset)], Style: ChartPalette.Total)],
-            Bands = bands,
-            Markers = markers,
-        }.Render();
+        };
+
+        var weights = OverCycle(
+            "Weights over the pixel cycle",
+            "Weight of each scheme at every weighted sample against time in the pixel cycle; the reset and signal windows are shaded, the charge transfer is a dashed line.",
+            "weight h (ADU per ADU)",
+            [.. r.Weights.Select(w => new ChartSeries(w.Label, time, [.. w.H.Take(reset), double.NaN, .. w.H.Skip(reset)], Style: ChartPalette.Scheme(w.Scheme)))]).Render();
+        var step = OverCycle(
+            "Step response seen by the weighted samples",
+            "Fraction of the charge step that each weighted sample sees (0 before the transfer), against time in the pixel cycle.",
+            "step response",
+            [new ChartSeries($"step response as a fraction of the final value ({(t.Step == Readout.StepModel.Pole ? "through the front-end pole" : "ideal step")})", time, [.. g.Step.Take(reset), double.NaN, .. g.Step.Skip(reset)], Style: ChartPalette.Total)],
+            -0.05,
+            1.2,
+            280).Render();
         return new ReportSection("Weights against time", [
             new ReportBlock { Svg = weights, Caption = $"Weights of the three schemes at the {Human.Whole(g.Count)} weighted samples (design --json: samples.time_s, schemes[i].weights)." },
             new ReportBlock { Svg = step, Caption = "The step response at the same samples (design --json: samples.step); the weights make the signal window's weighted step equal to one." },
