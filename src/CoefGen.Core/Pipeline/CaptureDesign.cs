@@ -24,7 +24,7 @@ public static class CaptureDesign
         var shrinkage = covariance.Shrinkage.ToString("0.000", CultureInfo.InvariantCulture);
         var source = $"capture covariance ({covariance.Pixels.ToString(CultureInfo.InvariantCulture)} cycles, shrinkage {shrinkage})";
         var optimalLabel = d.Weights.RejectDrift ? "optimal on the capture (drift rejected)" : "optimal on the capture";
-        WeightSet[] weights = [model.Weights[0], model.Weights[1], new WeightSet(WeightScheme.Optimal, optimalLabel, solution.H)];
+        WeightSet[] weights = [model.Weights[0], model.Weights[1], new WeightSet(WeightScheme.Optimal, optimalLabel, solution.H), .. model.Weights.Skip(3)];
         var predictions = weights.Select(w => Predict(w, covariance, d, source)).ToArray();
         var chosen = weights.First(w => w.Scheme == d.Weights.Scheme);
         var t = d.Timing;

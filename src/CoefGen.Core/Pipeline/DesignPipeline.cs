@@ -45,6 +45,12 @@ public static class DesignPipeline
         var covariance = noise.Sample(grid);
         var solver = OptimalSolverSelection.For(grid.Count);
         var weights = SolveWeights(description, grid, covariance, solver.Solver);
+        RegretTable? regret = null;
+        if (description.Scenarios is not null)
+        {
+            (var robust, regret) = ScenarioStage.Run(description, grid, weights, solver.Solver);
+            weights = [.. weights, robust];
+        }
 
         var span = grid.SampleIndex[^1] - grid.SampleIndex[0] + 1L;
         Func<IReadOnlyList<double>, double>? frequencyDomain = frequencyCheck && grid.Count * span <= FrequencyCheckLimit
@@ -70,6 +76,7 @@ public static class DesignPipeline
             OptimalSolver = solver.Name,
             FixedPointSettings = resolution.Settings,
             Datapath = integer,
+            Regret = regret,
             Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning), .. CaptureNotice(description)],
         };
     }

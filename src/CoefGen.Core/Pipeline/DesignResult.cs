@@ -18,7 +18,7 @@ public sealed record DesignResult
 
     public required SampledCovariance Covariance { get; init; }
 
-    /// <summary>Boxcar, weighted and optimal, in that order.</summary>
+    /// <summary>Boxcar, weighted and optimal, in that order, then robust when the file names noise scenarios.</summary>
     public required IReadOnlyList<WeightSet> Weights { get; init; }
 
     /// <summary>One prediction per entry of <see cref="Weights"/>.</summary>
@@ -34,6 +34,9 @@ public sealed record DesignResult
 
     /// <summary>When the noise comes from a capture (noise.capture): the file and how its covariance was formed; null otherwise.</summary>
     public string? CaptureSource { get; init; }
+
+    /// <summary>Every scheme's read noise in every noise scenario ([scenarios]), or null when the file names none.</summary>
+    public RegretTable? Regret { get; init; }
 
     /// <summary>Warnings from every stage.</summary>
     public required IReadOnlyList<Diagnostic> Warnings { get; init; }

@@ -33,4 +33,19 @@ public static class ReadoutCodes
     public const string ExplicitShape = "CG1401";
     public const string ShapeWithoutExplicit = "CG1402";
     public const string PoleStepWithoutPole = "CG1403";
+
+    /// <summary>A scenario override names a key that is not an overridable noise key.</summary>
+    public const string ScenarioKey = "CG1601";
+
+    /// <summary>Two scenarios with the same name.</summary>
+    public const string DuplicateScenarioName = "CG1602";
+
+    /// <summary>No scenario, or more than <c>ScenariosSectionReader.MaxCases</c>.</summary>
+    public const string ScenarioCount = "CG1603";
+
+    /// <summary>A scenario range is not [low, high] with low &lt;= high.</summary>
+    public const string ScenarioRange = "CG1604";
+
+    /// <summary>weights.scheme = "robust" without a [scenarios] section.</summary>
+    public const string RobustWithoutScenarios = "CG1605";
 }

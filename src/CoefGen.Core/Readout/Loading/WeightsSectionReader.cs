@@ -6,7 +6,7 @@ namespace CoefGen.Core.Readout.Loading;
 internal static class WeightsSectionReader
 {
     private static readonly (string, WeightScheme)[] Schemes =
-        [("boxcar", WeightScheme.Boxcar), ("weighted", WeightScheme.Weighted), ("optimal", WeightScheme.Optimal)];
+        [("boxcar", WeightScheme.Boxcar), ("weighted", WeightScheme.Weighted), ("optimal", WeightScheme.Optimal), ("robust", WeightScheme.Robust)];
 
     private static readonly (string, WindowShape)[] Windows =
         [("triangle", WindowShape.Triangle), ("hann", WindowShape.Hann), ("trapezoid", WindowShape.Trapezoid), ("explicit", WindowShape.Explicit)];
