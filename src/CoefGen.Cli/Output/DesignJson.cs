@@ -27,6 +27,7 @@ internal static class DesignJson
             Readout(w, r);
             Samples(w, r);
             Schemes(w, r);
+            RegretJson.Write(w, r);
             FixedPointJson.Write(w, r);
             w.WriteStartArray("warnings");
             foreach (var d in r.Warnings)

@@ -16,7 +16,7 @@ public static class DesignReport
     {
         ArgumentNullException.ThrowIfNull(r);
         ArgumentNullException.ThrowIfNull(emitted);
-        return [Description(r), Noise(r), Weights(r), Spectra(r), Budget(r), Proof(r), Emitted(emitted)];
+        return [Description(r), Noise(r), .. RegretReportSection.For(r), Weights(r), Spectra(r), Budget(r), Proof(r), Emitted(emitted)];
     }
 
     private static ReportCell N(string path, double v) => ReportCell.Number(path, v);
