@@ -25,7 +25,7 @@ internal static class SweepCommand
         var json = new Option<bool>("--json") { Description = "Print JSON (schema coefgen.sweep/1) instead of tables." };
         var target = new Option<double?>("--target-noise-e") { Description = "Find the smallest equal reset/signal window count (in samples) whose read noise meets this many e- rms." };
         var split = new Option<bool>("--split-pixel-time") { Description = "For the file's pixel cycle, find the split between reset window, dead time and signal window with the lowest read noise." };
-        var scheme = new Option<string?>("--scheme") { Description = "Scheme the searches optimise: boxcar, weighted or optimal (default: the file's weights.scheme)." };
+        var scheme = new Option<string?>("--scheme") { Description = "Scheme the searches optimise: boxcar, weighted, optimal or robust (default: the file's weights.scheme)." };
         var cmd = new Command(
             "sweep",
             "Design the readout at many points: vary numeric keys over a grid and tabulate the read noise of every scheme and the " +
@@ -106,7 +106,7 @@ internal static class SweepCommand
             chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
             if (chosen is null)
             {
-                error.WriteLine($"error: --scheme '{schemeWord}': expected boxcar, weighted or optimal");
+                error.WriteLine($"error: --scheme '{schemeWord}': expected boxcar, weighted, optimal or robust");
                 return ExitCodes.BadInput;
             }
 
@@ -169,6 +169,7 @@ internal static class SweepCommand
         "boxcar" => WeightScheme.Boxcar,
         "weighted" => WeightScheme.Weighted,
         "optimal" => WeightScheme.Optimal,
+        "robust" => WeightScheme.Robust,
         _ => null,
     };
 
