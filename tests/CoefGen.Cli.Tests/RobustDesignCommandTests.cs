@@ -1,0 +1,73 @@
+using System.Text.Json;
+
+namespace CoefGen.Cli.Tests;
+
+/// <summary>The shipped robust example through design (text and JSON), emit, vectors and verify.</summary>
+public class RobustDesignCommandTests
+{
+    private const string Example = "slowscan_robust.toml";
+
+    [Fact]
+    public void Design_prints_the_regret_table_with_worst_case_and_mean_rows_and_the_duality_gap()
+    {
+        var r = CliRunner.Run("design", RepoPaths.Example(Example));
+        Assert.True(r.ExitCode == 0, r.Error);
+        Assert.Contains("robust (least worst regret over 4 scenarios) *", r.Output, StringComparison.Ordinal);
+        Assert.Contains("Noise scenarios (4;", r.Output, StringComparison.Ordinal);
+        Assert.Contains("duality gap", r.Output, StringComparison.Ordinal);
+        Assert.Contains("\n  worst case ", r.Output, StringComparison.Ordinal);
+        Assert.Contains("\n  mean ", r.Output, StringComparison.Ordinal);
+        Assert.Contains("source[0].flicker_corner_hz=200000", r.Output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Design_json_has_the_scenarios_object_and_robust_has_the_smallest_worst_ratio()
+    {
+        var r = CliRunner.Run("design", RepoPaths.Example(Example), "--json");
+        Assert.True(r.ExitCode == 0, r.Error);
+        using var doc = JsonDocument.Parse(r.Output);
+        var root = doc.RootElement;
+        var schemes = root.GetProperty("schemes").EnumerateArray().Select(s => s.GetProperty("scheme").GetString()).ToArray();
+        Assert.Equal(["boxcar", "weighted", "optimal", "robust"], schemes);
+        var s = root.GetProperty("scenarios");
+        Assert.Equal("regret", s.GetProperty("objective").GetString());
+        Assert.Equal("noise.source[0].flicker_corner_hz", s.GetProperty("varied_key").GetString());
+        var cases = s.GetProperty("cases").EnumerateArray().ToArray();
+        Assert.Equal(4, cases.Length);
+        Assert.Equal(20000, cases[1].GetProperty("overrides").GetProperty("noise.source[0].flicker_corner_hz").GetDouble());
+        Assert.Equal(1.0, cases.Sum(c => c.GetProperty("robust_lambda").GetDouble()), 12);
+        Assert.True(s.GetProperty("robust_solve").GetProperty("relative_duality_gap").GetDouble() < 1e-6);
+        var regret = s.GetProperty("regret").EnumerateArray().ToArray();
+        Assert.Equal(schemes, regret.Select(x => x.GetProperty("scheme").GetString()).ToArray());
+        var worst = regret.Select(x => x.GetProperty("worst_ratio").GetDouble()).ToArray();
+        Assert.Equal(worst.Min(), worst[3]);
+        foreach (var row in regret)
+        {
+            Assert.Equal(4, row.GetProperty("noise_e_rms").GetArrayLength());
+            Assert.Equal(4, row.GetProperty("ratio_to_optimum").GetArrayLength());
+        }
+    }
+
+    [Fact]
+    public void Vectors_of_the_robust_design_verify_with_no_mismatch()
+    {
+        var dir = RepoPaths.TempDir();
+        var v = CliRunner.Run("vectors", RepoPaths.Example(Example), "--out", dir, "--pixels", "50", "--seed", "3");
+        Assert.True(v.ExitCode == 0, v.Error);
+        var dump = Path.Combine(dir, "dut.txt");
+        File.WriteAllLines(dump, File.ReadAllLines(Path.Combine(dir, "expected.txt")).Select(l => l.Split(' ')[0]));
+        var r = CliRunner.Run("verify", RepoPaths.Example(Example), "--vectors", dir, "--dut", dump);
+        Assert.True(r.ExitCode == 0, r.Output + r.Error);
+        Assert.Contains("compared 50 pixels", r.Output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Emit_writes_the_robust_tables()
+    {
+        var dir = RepoPaths.TempDir();
+        var r = CliRunner.Run("emit", RepoPaths.Example(Example), "--out", dir);
+        Assert.True(r.ExitCode == 0, r.Output + r.Error);
+        var header = File.ReadAllText(Path.Combine(dir, "red_ch0_robust_coefs.h"));
+        Assert.Contains("RED_CH0_ROBUST", header, StringComparison.Ordinal);
+    }
+}
