@@ -68,6 +68,6 @@ public class RobustDesignCommandTests
         var r = CliRunner.Run("emit", RepoPaths.Example(Example), "--out", dir);
         Assert.True(r.ExitCode == 0, r.Output + r.Error);
         var header = File.ReadAllText(Path.Combine(dir, "red_ch0_robust_coefs.h"));
-        Assert.Contains("RED_CH0_ROBUST", header, StringComparison.Ordinal);
+        Assert.Contains("Scheme: robust (least worst regret over 4 scenarios)", header, StringComparison.Ordinal);
     }
 }

@@ -152,7 +152,7 @@ internal static class ScenariosSectionReader
             }
 
             var overrides = axes.Select((a, i) => new NoiseOverride(a.Key, a.Levels[levels[i]])).ToArray();
-            var name = string.Join(", ", overrides.Select(o => $"{ShortKey(o.Key)}={o.Value.ToString("G6", CultureInfo.InvariantCulture)}"));
+            var name = string.Join(", ", overrides.Select(o => $"{ShortKey(o.Key)}={Round6(o.Value).ToString("R", CultureInfo.InvariantCulture)}"));
             result.Add((new NoiseScenario(name, overrides), range.Location, range.Path));
         }
 
@@ -224,6 +224,10 @@ internal static class ScenariosSectionReader
 
         return (values[0], values[1]);
     }
+
+    /// <summary>Six significant digits, written in full ("2449490", not "2.44949E+06") for scenario names.</summary>
+    private static double Round6(double v) =>
+        v == 0 ? 0 : double.Parse(v.ToString("G6", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
 
     private static string ShortKey(string key) => key.StartsWith("noise.", StringComparison.Ordinal) ? key["noise.".Length..] : key;
 
