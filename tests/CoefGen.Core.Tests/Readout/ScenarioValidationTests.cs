@@ -66,6 +66,10 @@ public class ScenarioValidationTests
         AssertOnly(Load(toml), "CG1604", "scenarios.range.noise.front_end_pole_hz", LineOf(toml, "[\"3 MHz\""));
         var one = WithScenarios("[scenarios.range]\n\"noise.front_end_pole_hz\" = [1e6]");
         AssertOnly(Load(one), "CG1604", "scenarios.range.noise.front_end_pole_hz", LineOf(one, "[1e6]"));
+        var kind = WithScenarios("[scenarios.range]\n\"noise.front_end_pole_hz\" = [true, \"2 MV\"]");
+        AssertOnly(Load(kind), "CG1003", "scenarios.range.noise.front_end_pole_hz[0]", LineOf(kind, "[true"));
+        var unit = WithScenarios("[scenarios.range]\n\"noise.front_end_pole_hz\" = [1e6, \"2 MV\"]");
+        AssertOnly(Load(unit), "CG1003", "scenarios.range.noise.front_end_pole_hz[1]", LineOf(unit, "\"2 MV\""));
     }
 
     [Fact]

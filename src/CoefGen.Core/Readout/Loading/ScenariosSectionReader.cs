@@ -176,30 +176,13 @@ internal static class ScenariosSectionReader
         foreach (var item in array.Items)
         {
             var location = TomlTreeBuilder.Locate(item.Value ?? (SyntaxNode)item, context.File);
-            double value;
-            string? reason = null;
-            var code = ReadoutCodes.WrongType;
-            switch (item.Value)
+            string? reason = QuantitySyntax.TryRead(item.Value, unit, out var value, out var why) switch
             {
-                case IntegerValueSyntax i:
-                    value = i.Value;
-                    break;
-                case FloatValueSyntax f:
-                    value = f.Value;
-                    break;
-                case StringValueSyntax s:
-                    if (!SiQuantity.TryParse(s.Value ?? "", unit, out value, out var why))
-                    {
-                        reason = why;
-                    }
-
-                    break;
-                default:
-                    value = double.NaN;
-                    reason = $"element {index.ToString(CultureInfo.InvariantCulture)} of '{key}' is not a number or an SI string";
-                    break;
-            }
-
+                true => null,
+                false => why,
+                null => $"element {index.ToString(CultureInfo.InvariantCulture)} of '{key}' is not a number or an SI string",
+            };
+            var code = ReadoutCodes.WrongType;
             if (reason is null && (!double.IsFinite(value) || !rule.Accepts(value)))
             {
                 code = ReadoutCodes.OutOfRange;
