@@ -71,3 +71,34 @@ public class RobustDesignCommandTests
         Assert.Contains("Scheme: robust (least worst regret over 4 scenarios)", header, StringComparison.Ordinal);
     }
 }
+
+/// <summary>Scenarios with noise.capture: the robust weights come from the parametric scenarios, are predicted on the capture, and the regret rows are the weights actually shown.</summary>
+public class RobustOnCaptureTests
+{
+    [Fact]
+    public void The_robust_scheme_survives_the_capture_and_the_regret_table_rates_the_capture_optimum()
+    {
+        var dir = RepoPaths.TempDir();
+        foreach (var f in Directory.GetFiles(Path.Combine(RepoPaths.Root, "examples"), "capture_bench*"))
+        {
+            File.Copy(f, Path.Combine(dir, Path.GetFileName(f)));
+        }
+
+        var path = Path.Combine(dir, "capture_bench.toml");
+        var toml = File.ReadAllText(path).Replace("scheme = \"optimal\"", "scheme = \"robust\"", StringComparison.Ordinal)
+            + "\n[scenarios.range]\n\"noise.source[0].white_nv_per_rthz\" = [20, 40]\n";
+        File.WriteAllText(path, toml);
+        var r = CliRunner.Run("design", path, "--json");
+        Assert.True(r.ExitCode == 0, r.Error);
+        using var doc = JsonDocument.Parse(r.Output);
+        var root = doc.RootElement;
+        var schemes = root.GetProperty("schemes").EnumerateArray().ToArray();
+        Assert.Equal("robust", schemes[3].GetProperty("scheme").GetString());
+        Assert.True(schemes[3].GetProperty("chosen").GetBoolean());
+        var optimalOnCapture = schemes[2].GetProperty("variance_v2").GetDouble();
+        Assert.True(schemes[3].GetProperty("variance_v2").GetDouble() >= optimalOnCapture * (1 - 1e-12));
+        var regret = root.GetProperty("scenarios").GetProperty("regret").EnumerateArray().ToArray();
+        Assert.Equal("optimal on the capture", regret[2].GetProperty("label").GetString());
+        Assert.True(regret[3].GetProperty("worst_noise_e_rms").GetDouble() <= regret[2].GetProperty("worst_noise_e_rms").GetDouble());
+    }
+}

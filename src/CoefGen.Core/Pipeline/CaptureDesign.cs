@@ -35,6 +35,7 @@ public static class CaptureDesign
             Weights = weights,
             Predictions = predictions,
             Datapath = datapath,
+            Regret = model.Regret?.WithWeights(weights, d.Noise, d.Sensor),
             CaptureSource = $"{capture.SourcePath}: {source}",
             OptimalSolver = "dense null-space on the capture covariance",
             Warnings = [.. model.Warnings.Where(w => w.Code != "CG1309")],

@@ -22,6 +22,13 @@ public sealed record RegretTable(
     string? VariedKey,
     IReadOnlyList<double>? VariedValues)
 {
+    /// <summary>The scenario covariances the rows were evaluated on (to re-evaluate other weights, e.g. on a capture).</summary>
+    public IReadOnlyList<SampledCovariance> Covariances { get; init; } = [];
+
+    /// <summary>The same scenarios and robust solve with the rows of other weights (e.g. the optimum on a capture).</summary>
+    public RegretTable WithWeights(IReadOnlyList<WeightSet> weights, NoiseSpec nominal, SensorSpec sensor) =>
+        Build(nominal, Scenarios, Covariances, weights, Robust, sensor);
+
     /// <summary>Builds the table: every weight set evaluated on every scenario covariance.</summary>
     public static RegretTable Build(
         NoiseSpec nominal,
@@ -53,6 +60,6 @@ public sealed record RegretTable(
             values = [.. scenarios.Select(s => s.Overrides.Count == 1 ? s.Overrides[0].Value : nominalValue)];
         }
 
-        return new RegretTable(scenarios, optimum, rows, robust, values is null ? null : key, values);
+        return new RegretTable(scenarios, optimum, rows, robust, values is null ? null : key, values) { Covariances = covariances };
     }
 }
