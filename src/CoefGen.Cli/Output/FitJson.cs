@@ -54,6 +54,7 @@ internal static class FitJson
             w.WriteEndArray();
             w.WriteEndObject();
             w.WriteString("noise_section", FittedNoiseSection.ToToml(d, a));
+            w.WriteString("scenarios_section", FittedScenarioRange.ToToml(a));
             w.WriteStartArray("validation");
             foreach (var v in a.Validation)
             {

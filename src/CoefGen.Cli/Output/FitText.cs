@@ -32,6 +32,8 @@ internal static class FitText
 
         w.Append("\nReady to paste into the readout file (replaces its [noise] section):\n\n");
         w.Append(FittedNoiseSection.ToToml(d, a));
+        w.Append($"\nFor weights that stay good over the fit's uncertainty (each parameter ±{Eng.NumShort(FittedScenarioRange.Sigmas)} sigma; with weights.scheme = \"robust\"):\n\n");
+        w.Append(FittedScenarioRange.ToToml(a));
         if (a.Validation.Count > 0)
         {
             var perE = d.Sensor.VoltsAtAdcPerElectron;

@@ -35,6 +35,37 @@ public class FittedSectionRoundTripTests
         Assert.Equal(analysis.Fit.Model.PoleHz, reloaded.Description.Noise.FrontEndPoleHz!.Value, analysis.Fit.Model.PoleHz * 5e-4);
     }
 
+    [Fact]
+    public void The_fit_confidence_box_pasted_as_scenarios_gives_a_robust_design_over_its_corners_and_edges()
+    {
+        var root = Root();
+        var readoutPath = Path.Combine(root, "examples", "capture_bench.toml");
+        var text = File.ReadAllText(readoutPath);
+        byte[]? ReadRelative(string rel) => File.ReadAllBytes(Path.Combine(root, "examples", rel));
+        var d = ReadoutLoader.Load(System.Text.Encoding.UTF8.GetBytes(text), readoutPath, ReadRelative).Description!;
+        var capturePath = Path.Combine(root, "examples", d.Noise.CapturePath!);
+        var parsed = CaptureParser.Parse(
+            File.ReadAllBytes(capturePath), capturePath,
+            new CaptureFormat(CaptureFormat.EncodingFromFileName(capturePath), CaptureLayout.PixelSynchronous, d.Timing.PixelSamples), d.Adc);
+        var analysis = CaptureAnalysis.Run(d, parsed.Capture!, new CaptureAnalysisOptions());
+        var start = text.IndexOf("[noise]", StringComparison.Ordinal);
+        var end = text.IndexOf("[weights]", StringComparison.Ordinal);
+        var pasted = text[..start] + FittedNoiseSection.ToToml(d, analysis).TrimEnd() + "\n\n" + FittedScenarioRange.ToToml(analysis) + "\n"
+            + text[end..].Replace("scheme = \"optimal\"", "scheme = \"robust\"", StringComparison.Ordinal);
+        var reloaded = ReadoutLoader.Load(System.Text.Encoding.UTF8.GetBytes(pasted), readoutPath, ReadRelative);
+        Assert.True(reloaded.Description is not null, string.Join("\n", reloaded.Diagnostics));
+        var s = reloaded.Description!.Scenarios!;
+        var keys = s.Cases.SelectMany(c => c.Overrides.Select(o => o.Key)).Distinct().Count();
+        Assert.Equal(1 + (1 << keys) + (keys << (keys - 1)), s.Cases.Count); // nominal + corners + edge midpoints
+        var low = s.Cases[1].Overrides.Single(o => o.Key == "noise.source[0].white_nv_per_rthz").Value;
+        var expected = analysis.Fit.WhiteNvPerRtHz * Math.Exp(-FittedScenarioRange.Sigmas * analysis.Fit.WhiteLogSigma / 2);
+        Assert.Equal(expected, low, expected * 5e-4);
+        var design = CoefGen.Core.Pipeline.DesignPipeline.Run(reloaded.Description, CoefGen.Core.Tests.Vectors.ExampleDesigns.Catalog);
+        Assert.True(design.Regret!.Robust.RelativeGap < 1e-6);
+        var rows = design.Regret.Rows;
+        Assert.True(rows.Single(r => r.Scheme == WeightScheme.Robust).WorstRatio <= rows.Single(r => r.Scheme == WeightScheme.Optimal).WorstRatio);
+    }
+
     private static string Root()
     {
         for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
