@@ -102,3 +102,34 @@ public class RobustOnCaptureTests
         Assert.True(regret[3].GetProperty("worst_noise_e_rms").GetDouble() <= regret[2].GetProperty("worst_noise_e_rms").GetDouble());
     }
 }
+
+/// <summary>sweep over a readout with scenarios: every scheme's worst-case regret per point, equal to `design` at that point.</summary>
+public class RobustSweepTests
+{
+    [Fact]
+    public void Sweep_reports_the_worst_regret_of_every_scheme_as_design_does_and_robust_is_never_above_optimal()
+    {
+        var example = RepoPaths.Example("slowscan_robust.toml");
+        var dir = RepoPaths.TempDir();
+        var csv = Path.Combine(dir, "s.csv");
+        var sweep = CliRunner.Run("sweep", example, "--vary", "noise.front_end_pole_hz=2M,3M", "--json", "--csv", csv);
+        Assert.True(sweep.ExitCode == 0, sweep.Error);
+        using var doc = JsonDocument.Parse(sweep.Output);
+        var points = doc.RootElement.GetProperty("points").EnumerateArray().ToArray();
+        Assert.Equal(2, points.Length);
+        var header = File.ReadAllLines(csv)[0].Split(',');
+        Assert.Contains("robust_worst_regret", header);
+        var text = File.ReadAllText(example);
+        for (var i = 0; i < points.Length; i++)
+        {
+            var schemes = points[i].GetProperty("schemes").EnumerateArray().ToDictionary(s => s.GetProperty("scheme").GetString()!, s => s.GetProperty("worst_regret").GetDouble());
+            Assert.True(schemes["robust"] <= schemes["optimal"]);
+            var path = Path.Combine(dir, $"p{i.ToString(System.Globalization.CultureInfo.InvariantCulture)}.toml");
+            File.WriteAllText(path, text.Replace("front_end_pole_hz = \"2.5 MHz\"", i == 0 ? "front_end_pole_hz = 2000000" : "front_end_pole_hz = 3000000", StringComparison.Ordinal));
+            using var design = JsonDocument.Parse(CliRunner.Run("design", path, "--json").Output);
+            var regret = design.RootElement.GetProperty("scenarios").GetProperty("regret").EnumerateArray().ToArray();
+            Assert.Equal(regret[3].GetProperty("worst_ratio").GetDouble(), schemes["robust"]);
+            Assert.Equal(regret[2].GetProperty("worst_ratio").GetDouble(), schemes["optimal"]);
+        }
+    }
+}
