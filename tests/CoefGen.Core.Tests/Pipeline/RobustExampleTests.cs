@@ -28,6 +28,21 @@ public class RobustExampleTests
     }
 
     [Fact]
+    public void With_the_nominal_noise_as_the_only_scenario_the_robust_design_is_the_optimal_design()
+    {
+        // One scenario: the minimax is the plain optimum (definition), so the integer tables are the optimal ones too.
+        var text = File.ReadAllText(ExampleDesigns.ExamplePath("slowscan_spectro.toml"));
+        var optimal = ExampleDesigns.Load("slowscan_spectro.toml");
+        var robust = ExampleDesigns.FromText(text.Replace("scheme = \"optimal\"", "scheme = \"robust\"", StringComparison.Ordinal) + "\n[scenarios]\n", "nominal_only.toml");
+        var h = robust.Chosen.H;
+        var reference = optimal.Chosen.H;
+        Assert.Equal(WeightScheme.Robust, robust.Chosen.Scheme);
+        Assert.True(h.Zip(reference, (a, b) => Math.Abs(a - b)).Max() <= 1e-9 * reference.Max(Math.Abs));
+        Assert.Equal(optimal.Datapath.Coefficients, robust.Datapath.Coefficients);
+        Assert.Equal(0, robust.Regret!.Robust.RelativeGap);
+    }
+
+    [Fact]
     public void Vectors_of_the_robust_design_match_the_bit_exact_model_with_no_mismatch()
     {
         var r = ExampleDesigns.Load(Example);
