@@ -82,6 +82,19 @@ public class ScenarioValidationTests
     }
 
     [Fact]
+    public void A_scenario_that_makes_the_noise_unbounded_is_reported_at_its_name()
+    {
+        // A file whose only source is silent needs no bandwidth limit; a scenario that gives it noise does.
+        var silent = Minimal.Replace("front_end_pole_hz = \"2 MHz\"\n", "", StringComparison.Ordinal);
+        var start = silent.IndexOf("white_nv_per_rthz", StringComparison.Ordinal);
+        var end = silent.IndexOf('\n', start);
+        silent = (silent[..start] + "white_nv_per_rthz = 0" + silent[end..]).Replace("flicker_corner_hz = \"30 kHz\"", "flicker_corner_hz = 0", StringComparison.Ordinal);
+        Assert.True(Load(silent).Description is not null, string.Join("\n", Load(silent).Diagnostics));
+        var toml = silent + "\n[[scenarios.case]]\nname = \"loud\"\n\"noise.source[0].white_nv_per_rthz\" = 5\n";
+        AssertOnly(Load(toml), "CG1307", "scenarios.case[0].name", LineOf(toml, "name = \"loud\""));
+    }
+
+    [Fact]
     public void The_robust_scheme_needs_scenarios()
     {
         var toml = Minimal + "\n[weights]\nscheme = \"robust\"\n";

@@ -68,6 +68,11 @@ internal static class ScenariosSectionReader
         }
 
         CheckNames(context, cases);
+        if (noise is not null)
+        {
+            CheckBounded(context, noise, cases);
+        }
+
         if (context.ErrorCount == errorsBefore && (cases.Count == 0 || cases.Count > MaxCases))
         {
             context.Error(ReadoutCodes.ScenarioCount, section.Location, section.Path,
@@ -213,6 +218,20 @@ internal static class ScenariosSectionReader
         v == 0 ? 0 : double.Parse(v.ToString("G6", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
 
     private static string ShortKey(string key) => key.StartsWith("noise.", StringComparison.Ordinal) ? key["noise.".Length..] : key;
+
+    /// <summary>A scenario may not give a source white or 1/f noise when nothing limits the bandwidth (as in [noise]).</summary>
+    private static void CheckBounded(LoadContext context, NoiseSpec noise, List<(NoiseScenario Scenario, SourceLocation Location, string Path)> cases)
+    {
+        foreach (var (scenario, location, path) in cases)
+        {
+            var n = NoiseOverrides.Apply(noise, scenario.Overrides);
+            if (n.FrontEndPoleHz is null && n.BandwidthHz is null && n.Sources.Any(s => s.WhiteNvPerRtHz > 0 || s.FlickerCornerHz > 0))
+            {
+                context.Error(ReadoutCodes.UnboundedNoise, location, path,
+                    $"scenario \"{scenario.Name}\" gives a source white or 1/f noise but nothing limits its bandwidth, so its variance is infinite; override noise.front_end_pole_hz or noise.bandwidth_hz too");
+            }
+        }
+    }
 
     private static void CheckNames(LoadContext context, List<(NoiseScenario Scenario, SourceLocation Location, string Path)> cases)
     {
