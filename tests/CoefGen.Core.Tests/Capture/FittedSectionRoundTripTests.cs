@@ -8,16 +8,7 @@ public class FittedSectionRoundTripTests
     [Fact]
     public void The_ready_to_paste_noise_section_loads_back_with_the_fitted_values()
     {
-        var root = Root();
-        var readoutPath = Path.Combine(root, "examples", "capture_bench.toml");
-        var text = File.ReadAllText(readoutPath);
-        byte[]? ReadRelative(string rel) => File.ReadAllBytes(Path.Combine(root, "examples", rel));
-        var d = ReadoutLoader.Load(System.Text.Encoding.UTF8.GetBytes(text), readoutPath, ReadRelative).Description!;
-        var capturePath = Path.Combine(root, "examples", d.Noise.CapturePath!);
-        var parsed = CaptureParser.Parse(
-            File.ReadAllBytes(capturePath), capturePath,
-            new CaptureFormat(CaptureFormat.EncodingFromFileName(capturePath), CaptureLayout.PixelSynchronous, d.Timing.PixelSamples), d.Adc);
-        var analysis = CaptureAnalysis.Run(d, parsed.Capture!, new CaptureAnalysisOptions());
+        var (readoutPath, text, d, analysis) = Example();
 
         var section = FittedNoiseSection.ToToml(d, analysis);
 
@@ -38,16 +29,7 @@ public class FittedSectionRoundTripTests
     [Fact]
     public void The_fit_confidence_box_pasted_as_scenarios_gives_a_robust_design_over_its_corners_and_edges()
     {
-        var root = Root();
-        var readoutPath = Path.Combine(root, "examples", "capture_bench.toml");
-        var text = File.ReadAllText(readoutPath);
-        byte[]? ReadRelative(string rel) => File.ReadAllBytes(Path.Combine(root, "examples", rel));
-        var d = ReadoutLoader.Load(System.Text.Encoding.UTF8.GetBytes(text), readoutPath, ReadRelative).Description!;
-        var capturePath = Path.Combine(root, "examples", d.Noise.CapturePath!);
-        var parsed = CaptureParser.Parse(
-            File.ReadAllBytes(capturePath), capturePath,
-            new CaptureFormat(CaptureFormat.EncodingFromFileName(capturePath), CaptureLayout.PixelSynchronous, d.Timing.PixelSamples), d.Adc);
-        var analysis = CaptureAnalysis.Run(d, parsed.Capture!, new CaptureAnalysisOptions());
+        var (readoutPath, text, d, analysis) = Example();
         var start = text.IndexOf("[noise]", StringComparison.Ordinal);
         var end = text.IndexOf("[weights]", StringComparison.Ordinal);
         var pasted = text[..start] + FittedNoiseSection.ToToml(d, analysis).TrimEnd() + "\n\n" + FittedScenarioRange.ToToml(analysis) + "\n"
@@ -65,6 +47,22 @@ public class FittedSectionRoundTripTests
         var rows = design.Regret.Rows;
         Assert.True(rows.Single(r => r.Scheme == WeightScheme.Robust).WorstRatio <= rows.Single(r => r.Scheme == WeightScheme.Optimal).WorstRatio);
     }
+
+    /// <summary>The capture example: its path and text, its description and the analysis of its capture.</summary>
+    private static (string Path, string Text, ReadoutDescription Description, CaptureAnalysisResult Analysis) Example()
+    {
+        var root = Root();
+        var readoutPath = Path.Combine(root, "examples", "capture_bench.toml");
+        var text = File.ReadAllText(readoutPath);
+        var d = ReadoutLoader.Load(System.Text.Encoding.UTF8.GetBytes(text), readoutPath, ReadRelative).Description!;
+        var capturePath = Path.Combine(root, "examples", d.Noise.CapturePath!);
+        var parsed = CaptureParser.Parse(
+            File.ReadAllBytes(capturePath), capturePath,
+            new CaptureFormat(CaptureFormat.EncodingFromFileName(capturePath), CaptureLayout.PixelSynchronous, d.Timing.PixelSamples), d.Adc);
+        return (readoutPath, text, d, CaptureAnalysis.Run(d, parsed.Capture!, new CaptureAnalysisOptions()));
+    }
+
+    private static byte[]? ReadRelative(string rel) => File.ReadAllBytes(Path.Combine(Root(), "examples", rel));
 
     private static string Root()
     {
