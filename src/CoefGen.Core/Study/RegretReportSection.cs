@@ -62,16 +62,25 @@ public static class RegretReportSection
             xLabel = "scenario number (table order)";
         }
 
+        var xLog = t.VariedKey is not null && x[0] > 0 && x[^1] >= 10 * x[0] * (1 - 1e-9);
+        var ratioChart = new SvgLineChart
+        {
+            Title = "Ratio to each scenario's own optimum (regret)",
+            XLabel = xLabel,
+            YLabel = "read noise / own optimum",
+            XLog = xLog,
+            Series = [.. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.Ratio[i])]))],
+        }.Render();
         var chart = new SvgLineChart
         {
             Title = "Read noise in each noise scenario",
             XLabel = xLabel,
             YLabel = "read noise (e- rms)",
-            XLog = t.VariedKey is not null && x[0] > 0 && SvgLineChart.SpansDecade(x),
+            XLog = xLog,
             Series =
             [
-                new ChartSeries("own optimum of each scenario", x, [.. order.Select(i => t.OptimumElectrons[i])]),
                 .. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.SigmaElectrons[i])])),
+                new ChartSeries("own optimum of each scenario", x, [.. order.Select(i => t.OptimumElectrons[i])]), // last: scheme colours match the ratio chart
             ],
         }.Render();
         var robust = t.Robust;
@@ -87,6 +96,7 @@ public static class RegretReportSection
                 new ReportBlock { Paragraph = $"{I(t.Scenarios.Count)} noise scenarios; every scheme's read noise in each and its ratio to that scenario's own optimum (the optimal weights for that noise). {how}" },
                 new ReportBlock { Table = rows },
                 new ReportBlock { Svg = chart, Caption = "Read noise of every scheme against the varied key, with each scenario's own optimum as the lower envelope." },
+                new ReportBlock { Svg = ratioChart, Caption = "The same noise divided by each scenario's own optimum: the worst case over the scenarios is each scheme's worst-case regret." },
             ]),
         ];
     }
