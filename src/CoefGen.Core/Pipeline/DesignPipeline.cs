@@ -59,7 +59,7 @@ public static class DesignPipeline
         var integer = FixedPointDesigner.Design(
             description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift);
 
-        return new DesignResult
+        var result = new DesignResult
         {
             Description = description,
             Grid = grid,
@@ -70,8 +70,15 @@ public static class DesignPipeline
             OptimalSolver = solver.Name,
             FixedPointSettings = resolution.Settings,
             Datapath = integer,
-            Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning), .. CaptureNotice(description)],
+            Warnings =
+            [
+                .. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning),
+                .. CaptureNotice(description),
+                .. DesignPlausibility.Check(description, covariance, chosen.H, integer),
+            ],
         };
+        DesignFiniteness.ThrowIfNotFinite(result);
+        return result;
     }
 
     // Core does not read files: the CLI parses noise.capture and calls CaptureDesign.Apply, which drops this warning.

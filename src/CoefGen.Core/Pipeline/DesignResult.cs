@@ -1,3 +1,4 @@
+using CoefGen.Core.Capture;
 using CoefGen.Core.Diagnostics;
 using CoefGen.Core.FixedPoint;
 using CoefGen.Core.Noise;
@@ -34,6 +35,9 @@ public sealed record DesignResult
 
     /// <summary>When the noise comes from a capture (noise.capture): the file and how its covariance was formed; null otherwise.</summary>
     public string? CaptureSource { get; init; }
+
+    /// <summary>The capture covariance every prediction, the output fraction bits and the vectors' noise use (noise.capture); null otherwise.</summary>
+    public CaptureCovariance? CaptureCovariance { get; init; }
 
     /// <summary>Warnings from every stage.</summary>
     public required IReadOnlyList<Diagnostic> Warnings { get; init; }

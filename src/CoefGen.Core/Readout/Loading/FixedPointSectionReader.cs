@@ -23,9 +23,9 @@ internal static class FixedPointSectionReader
             section.Text("target", required: false),
             Bits(section, "coef_bits", 2, 63),
             Bits(section, "sample_bits", 2, 63),
-            Bits(section, "acc_bits", 2, 63),
-            Bits(section, "output_bits", 2, 63),
-            Bits(section, "output_frac_bits", 0, 32),
+            Bits(section, "acc_bits", 2, 64),
+            Bits(section, "output_bits", 2, 64),
+            Bits(section, "output_frac_bits", 0, 62),
             Word(section, "normalize", Normalize),
             Word(section, "rounding", Rounding),
             Word(section, "accumulator", Accumulator));
