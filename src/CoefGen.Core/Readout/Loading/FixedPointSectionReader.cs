@@ -25,7 +25,7 @@ internal static class FixedPointSectionReader
             Bits(section, "sample_bits", 2, 63),
             Bits(section, "acc_bits", 2, 64),
             Bits(section, "output_bits", 2, 64),
-            Bits(section, "output_frac_bits", 0, 62),
+            Bits(section, "output_frac_bits", 0, 32),
             Word(section, "normalize", Normalize),
             Word(section, "rounding", Rounding),
             Word(section, "accumulator", Accumulator));

@@ -10,22 +10,22 @@ namespace CoefGen.Core.Readout.Loading;
 /// </summary>
 internal static class PhysicalRange
 {
-    public static readonly NumberRule RateHz = Between(1, 1e12, "Hz");
+    public static readonly NumberRule RateHz = Between(1e-6, 1e12, "Hz");
 
-    public static readonly NumberRule FullScaleV = Between(1e-6, 1e3, "V");
+    public static readonly NumberRule FullScaleV = Between(1e-9, 1e3, "V");
 
     public static readonly NumberRule NoiseLsb = Between(0, 1e6, "LSB");
 
-    public static readonly NumberRule ConversionGainUvPerE = Between(1e-3, 1e6, "uV/e");
+    public static readonly NumberRule ConversionGainUvPerE = Between(1e-9, 1e6, "uV/e");
 
     /// <summary>Positive: a negative gain is refused with its own message (see <see cref="SensorSectionReader"/>).</summary>
-    public static readonly NumberRule Gain = Between(1e-6, 1e6, "V/V");
+    public static readonly NumberRule Gain = Between(1e-9, 1e6, "V/V");
 
     public static readonly NumberRule FrequencyHz = Between(1e-3, 1e12, "Hz");
 
     public static readonly NumberRule CornerHz = Between(0, 1e12, "Hz");
 
-    public static readonly NumberRule LowCutoffHz = Between(1e-9, 1e12, "Hz");
+    public static readonly NumberRule LowCutoffHz = Between(1e-12, 1e12, "Hz");
 
     public static readonly NumberRule WhiteNvPerRtHz = Between(0, 1e6, "nV/rtHz");
 
