@@ -29,6 +29,12 @@ internal static class PhysicalRange
 
     public static readonly NumberRule WhiteNvPerRtHz = Between(0, 1e6, "nV/rtHz");
 
+    /// <summary>The transfer instant lies inside the cycle, so within the sample counts the timing allows.</summary>
+    public static readonly NumberRule TransferSample = Between(0, TimingSectionReader.MaxSamples, "samples");
+
+    /// <summary>1e18 ns is 30 years: any cycle is shorter.</summary>
+    public static readonly NumberRule TransferNs = Between(0, 1e18, "ns");
+
     /// <summary>Explicit window shapes are relative weights; the bound keeps their sums finite.</summary>
     public static readonly NumberRule ShapeWeight = Between(0, 1e12, "");
 
