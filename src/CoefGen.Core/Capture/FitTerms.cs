@@ -14,6 +14,9 @@ public sealed record FitTerms(bool Flicker, bool FitPole, double? HeldPoleHz)
 
     public const string PoleTerm = "pole";
 
+    /// <summary>Fitted log parameters: W, then f_c and f_p when fitted.</summary>
+    public int ParameterCount => 1 + (Flicker ? 1 : 0) + (FitPole ? 1 : 0);
+
     /// <summary>The terms of the full model this fit leaves out.</summary>
     public IReadOnlyList<string> Unresolved =>
         [.. Flicker ? Array.Empty<string>() : [FlickerTerm], .. FitPole || HeldPoleHz is not null ? Array.Empty<string>() : [PoleTerm]];

@@ -25,34 +25,61 @@ public static class SpectrumFitter
     private const int GuardBins = 2;
 
     /// <summary>
-    /// Fits W, f_c and (unless <paramref name="fixedPoleHz"/> is given) f_p. A term the spectrum does not
-    /// resolve (its fit does not converge, or its log uncertainty exceeds <see cref="ResolvedLogSigma"/>) is left
-    /// out and the smaller model fitted: white + pole, then white + 1/f with no pole (white band-limited at
-    /// Nyquist), then white alone; <see cref="SpectrumFit.Unresolved"/> names what was left out. Returns null
-    /// only when not even the white level fits (e.g. a constant record).
+    /// Fits W, f_c and (unless <paramref name="fixedPoleHz"/> is given) f_p, and every smaller model: white +
+    /// pole, white + 1/f with no pole (white band-limited at Nyquist), white alone. A term is kept only when
+    /// leaving it out raises the residual sum (on the bins every model used) by more than
+    /// <see cref="TermSignificance"/> times the per-bin variance of the log spectrum: the smallest model within
+    /// that of the best is taken, and <see cref="SpectrumFit.Unresolved"/> names what it leaves out.
+    /// Returns null only when not even the white level fits (e.g. a record with a bin of zero power).
     /// </summary>
     public static SpectrumFit? Fit(WelchSpectrum spectrum, double digitalVarianceV2, double? fixedPoleHz)
     {
         ArgumentNullException.ThrowIfNull(spectrum);
-        foreach (var terms in FitTerms.Candidates(fixedPoleHz))
+        var fits = FitTerms.Candidates(fixedPoleHz)
+            .Select(t => (Terms: t, Fit: FitWith(spectrum, digitalVarianceV2, t)))
+            .Where(c => c.Fit is not null && Resolved(c.Fit, c.Terms))
+            .Select(c => (c.Terms, Fit: c.Fit!))
+            .ToList();
+        if (fits.Count == 0)
         {
-            var fit = FitWith(spectrum, digitalVarianceV2, terms);
-            if (fit is not null && Resolved(fit, terms, spectrum))
-            {
-                return fit;
-            }
+            return null;
         }
 
-        return null;
+        // Compare on the bins the richest model kept (a smaller model would mask its own misfit as "lines"), in
+        // units of the log-periodogram variance of one bin (trigamma(nu/2), inflated for correlated Hann bins).
+        var richest = fits.MaxBy(c => c.Terms.ParameterCount).Fit;
+        var common = Enumerable.Range(0, spectrum.FrequencyHz.Count).Where(i => richest.UsedBins[i]).ToArray();
+        var nu = spectrum.DegreesOfFreedom;
+        var bias = SpecialFunctions.DiGamma(nu / 2) - Math.Log(nu / 2);
+        var unit = SmallLinearAlgebra.Trigamma(nu / 2) * HannBinInflation;
+        double Chi(SampledSpectrumModel m) => common.Sum(i =>
+        {
+            var r = Math.Log(spectrum.PsdV2PerHz[i]) - bias - Math.Log(m.Psd(spectrum.FrequencyHz[i]));
+            return r * r;
+        }) / unit;
+
+        var scored = fits.Select(c => (c.Terms, c.Fit, Chi: Chi(c.Fit.Model))).ToList();
+        var best = scored.Min(c => c.Chi);
+        return scored
+            .Where(c => c.Chi <= best + TermSignificance)
+            .OrderBy(c => c.Terms.ParameterCount)
+            .ThenBy(c => c.Chi)
+            .First().Fit;
     }
 
-    /// <summary>A fitted log parameter with a larger 1-sigma (a factor e either way) is not resolved by the spectrum.</summary>
+    /// <summary>
+    /// A term must lower the residual sum by more than this many units of one bin's log-spectrum variance:
+    /// 25 is a 5 sigma change for one parameter (chi-square with 1 degree of freedom; common practice, no source).
+    /// </summary>
+    public const double TermSignificance = 25;
+
+    /// <summary>A fitted log parameter with a larger 1-sigma (a factor e either way) is not determined by the spectrum.</summary>
     public const double ResolvedLogSigma = 1.0;
 
-    private static bool Resolved(SpectrumFit fit, FitTerms terms, WelchSpectrum s) =>
+    private static bool Resolved(SpectrumFit fit, FitTerms terms) =>
         fit.WhiteLogSigma < ResolvedLogSigma
-        && (!terms.Flicker || (fit.FlickerLogSigma < ResolvedLogSigma && fit.Model.FlickerCornerHz >= s.ResolutionHz))
-        && (!terms.FitPole || (fit.PoleLogSigma < ResolvedLogSigma && fit.Model.PoleHz <= s.RateHz));
+        && (!terms.Flicker || fit.FlickerLogSigma < ResolvedLogSigma)
+        && (!terms.FitPole || fit.PoleLogSigma < ResolvedLogSigma);
 
     private static SpectrumFit? FitWith(WelchSpectrum spectrum, double digitalVarianceV2, FitTerms terms)
     {
