@@ -41,4 +41,7 @@ public static class FixedPointCodes
 
     /// <summary>Warning: the quantised coefficients no longer have the shape of the real weights.</summary>
     public const string ShapeLostInQuantisation = "CG2031";
+
+    /// <summary>No coefficient scale fits the weights into the coefficient width.</summary>
+    public const string NoCoefficientScale = "CG2032";
 }

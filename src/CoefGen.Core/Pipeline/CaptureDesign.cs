@@ -30,9 +30,9 @@ public static class CaptureDesign
         var predictions = weights.Select(w => Predict(w, covariance, d, source)).ToArray();
         var chosen = weights.First(w => w.Scheme == d.Weights.Scheme);
         var t = d.Timing;
-        var datapath = FixedPointDesigner.Design(
+        var datapath = IntegerStage.Run(d, () => FixedPointDesigner.Design(
             d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, t.Reset, t.Signal, d.Weights.RejectDrift,
-            covariance.QuadraticForm);
+            covariance.QuadraticForm));
         var result = model with
         {
             Weights = weights,

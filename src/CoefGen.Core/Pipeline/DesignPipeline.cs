@@ -56,8 +56,8 @@ public static class DesignPipeline
 
         var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
         var t = description.Timing;
-        var integer = FixedPointDesigner.Design(
-            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift);
+        var integer = IntegerStage.Run(description, () => FixedPointDesigner.Design(
+            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift));
 
         var result = new DesignResult
         {
