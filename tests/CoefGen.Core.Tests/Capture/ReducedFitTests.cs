@@ -18,7 +18,7 @@ public sealed class ReducedFitTests
         Assert.Equal([FitTerms.FlickerTerm, FitTerms.PoleTerm], fit.Unresolved);
         Assert.Null(fit.Model.PoleHz);
         Assert.Equal(0, fit.Model.FlickerCornerHz);
-        AssertWithin(Math.Log(truth.WhiteV2PerHz), Math.Log(fit.Model.WhiteV2PerHz), fit.WhiteLogSigma, "ln W");
+        SpectrumFitTests.AssertWithin(Math.Log(truth.WhiteV2PerHz), Math.Log(fit.Model.WhiteV2PerHz), fit.WhiteLogSigma, "ln W");
         Assert.True(fit.WhiteLogSigma < 0.02, $"sigma {fit.WhiteLogSigma}");
     }
 
@@ -28,8 +28,8 @@ public sealed class ReducedFitTests
         var truth = Bench with { FlickerCornerHz = 0 };
         var fit = SpectrumFitTests.FitStream(truth, 22);
         Assert.Equal([FitTerms.FlickerTerm], fit.Unresolved);
-        AssertWithin(Math.Log(truth.WhiteV2PerHz), Math.Log(fit.Model.WhiteV2PerHz), fit.WhiteLogSigma, "ln W");
-        AssertWithin(Math.Log(truth.PoleHz), Math.Log(fit.Model.PoleHz!.Value), fit.PoleLogSigma!.Value, "ln f_p");
+        SpectrumFitTests.AssertWithin(Math.Log(truth.WhiteV2PerHz), Math.Log(fit.Model.WhiteV2PerHz), fit.WhiteLogSigma, "ln W");
+        SpectrumFitTests.AssertWithin(Math.Log(truth.PoleHz), Math.Log(fit.Model.PoleHz!.Value), fit.PoleLogSigma!.Value, "ln f_p");
     }
 
     [Fact]
@@ -38,8 +38,8 @@ public sealed class ReducedFitTests
         var truth = Bench with { PoleHz = double.PositiveInfinity };
         var fit = SpectrumFitTests.FitStream(truth, 23);
         Assert.Equal([FitTerms.PoleTerm], fit.Unresolved);
-        AssertWithin(Math.Log(truth.WhiteV2PerHz), Math.Log(fit.Model.WhiteV2PerHz), fit.WhiteLogSigma, "ln W");
-        AssertWithin(Math.Log(truth.FlickerCornerHz), Math.Log(fit.Model.FlickerCornerHz), fit.FlickerLogSigma!.Value, "ln f_c");
+        SpectrumFitTests.AssertWithin(Math.Log(truth.WhiteV2PerHz), Math.Log(fit.Model.WhiteV2PerHz), fit.WhiteLogSigma, "ln W");
+        SpectrumFitTests.AssertWithin(Math.Log(truth.FlickerCornerHz), Math.Log(fit.Model.FlickerCornerHz), fit.FlickerLogSigma!.Value, "ln f_c");
     }
 
     [Fact]
@@ -74,7 +74,4 @@ public sealed class ReducedFitTests
         Assert.DoesNotContain("flicker_corner_hz", section, StringComparison.Ordinal);
         Assert.NotEmpty(analysis.Validation);
     }
-
-    private static void AssertWithin(double expected, double actual, double sigma, string what) =>
-        Assert.True(Math.Abs(actual - expected) <= 3 * sigma, $"{what}: fitted {actual}, true {expected}, sigma {sigma} ({(actual - expected) / sigma:F2} sigma)");
 }

@@ -66,6 +66,6 @@ public sealed class SpectrumFitTests
     // Quantisation LSB²/12 plus the ADC's own noise, as AdcSpec.DigitalVarianceV2.
     private static double Digital(SyntheticCapture.Model m) => m.LsbV * m.LsbV * ((1.0 / 12) + (m.AdcNoiseLsb * m.AdcNoiseLsb));
 
-    private static void AssertWithin(double expected, double actual, double sigma, string what) =>
+    internal static void AssertWithin(double expected, double actual, double sigma, string what) =>
         Assert.True(Math.Abs(actual - expected) <= 3 * sigma, $"{what}: fitted {actual}, true {expected}, sigma {sigma} ({(actual - expected) / sigma:F2} sigma)");
 }
