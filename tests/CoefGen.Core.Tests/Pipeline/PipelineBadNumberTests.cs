@@ -1,5 +1,7 @@
 using CoefGen.Core.Diagnostics;
+using CoefGen.Core.FixedPoint;
 using CoefGen.Core.Pipeline;
+using CoefGen.Core.Tests.FixedPoint;
 using static CoefGen.Core.Tests.Readout.ReadoutFixture;
 
 namespace CoefGen.Core.Tests.Pipeline;
@@ -22,6 +24,15 @@ public class PipelineBadNumberTests
         Assert.Equal("CG2032", d.Code);
         Assert.Equal("fixed_point.coef_bits", d.Key);
         Assert.Equal(LineOf(toml, "coef_bits = 2"), d.Location.Line);
+    }
+
+    [Fact]
+    public void The_quantiser_refuses_an_unrepresentable_case_with_its_own_exception()
+    {
+        var dc = new DesignCase(2, 1, [1.0, 1.0, 1.0], 2, 0.999, Settled: false);
+        Assert.False(dc.Representable);
+        var g = dc.Grid;
+        Assert.Throws<CoefficientWidthException>(() => Quantiser.Quantise(dc.Weights, g, dc.Covariance(g), dc.CoefBits, g.IsSettled));
     }
 
     [Fact]
