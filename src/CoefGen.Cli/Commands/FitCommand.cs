@@ -87,6 +87,7 @@ internal static class FitCommand
             return DiagnosticPrinter.PrintFailure(error, ex.Diagnostics);
         }
 
+        DiagnosticPrinter.Print(error, analysis.Warnings);
         if (outDir is not null)
         {
             AtomicFile.WriteAllText(Path.Combine(outDir, "fit_spectrum.csv"), FitFiles.SpectrumCsv(analysis));

@@ -21,14 +21,15 @@ public static class FittedScenarioRange
         var fit = analysis.Fit;
         var w = new StringBuilder("[scenarios]\nobjective = \"regret\"\n\n[scenarios.range]\n");
         Interval(w, "noise.source[0].white_nv_per_rthz", fit.WhiteNvPerRtHz, fit.WhiteLogSigma / 2);
-        if (fit.Model.FlickerCornerHz > 0)
+        // Only resolved terms get an interval: a term the fit left out has no estimate to vary.
+        if (fit.Model.FlickerCornerHz > 0 && fit.FlickerLogSigma is double flicker)
         {
-            Interval(w, "noise.source[0].flicker_corner_hz", fit.Model.FlickerCornerHz, fit.FlickerLogSigma);
+            Interval(w, "noise.source[0].flicker_corner_hz", fit.Model.FlickerCornerHz, flicker);
         }
 
-        if (fit.PoleLogSigma is double pole)
+        if (fit.PoleLogSigma is double pole && fit.Model.PoleHz is double poleHz)
         {
-            Interval(w, "noise.front_end_pole_hz", fit.Model.PoleHz, pole);
+            Interval(w, "noise.front_end_pole_hz", poleHz, pole);
         }
 
         return w.ToString();

@@ -62,10 +62,10 @@ public static class DesignPipeline
 
         var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
         var t = description.Timing;
-        var integer = FixedPointDesigner.Design(
-            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift);
+        var integer = IntegerStage.Run(description, () => FixedPointDesigner.Design(
+            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift));
 
-        return new DesignResult
+        var result = new DesignResult
         {
             Description = description,
             Grid = grid,
@@ -77,8 +77,15 @@ public static class DesignPipeline
             FixedPointSettings = resolution.Settings,
             Datapath = integer,
             Regret = regret,
-            Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning), .. CaptureNotice(description)],
+            Warnings =
+            [
+                .. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning),
+                .. CaptureNotice(description),
+                .. DesignPlausibility.Check(description, covariance, chosen.H, integer),
+            ],
         };
+        DesignFiniteness.ThrowIfNotFinite(result);
+        return result;
     }
 
     // Core does not read files: the CLI parses noise.capture and calls CaptureDesign.Apply, which drops this warning.

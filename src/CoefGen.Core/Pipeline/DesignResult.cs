@@ -1,3 +1,4 @@
+using CoefGen.Core.Capture;
 using CoefGen.Core.Diagnostics;
 using CoefGen.Core.FixedPoint;
 using CoefGen.Core.Noise;
@@ -37,6 +38,9 @@ public sealed record DesignResult
 
     /// <summary>Every scheme's read noise in every noise scenario ([scenarios]), or null when the file names none.</summary>
     public RegretTable? Regret { get; init; }
+
+    /// <summary>The capture covariance every prediction, the output fraction bits and the vectors' noise use (noise.capture); null otherwise.</summary>
+    public CaptureCovariance? CaptureCovariance { get; init; }
 
     /// <summary>Warnings from every stage.</summary>
     public required IReadOnlyList<Diagnostic> Warnings { get; init; }

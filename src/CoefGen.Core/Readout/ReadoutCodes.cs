@@ -30,6 +30,18 @@ public static class ReadoutCodes
     public const string UnboundedNoise = "CG1307";
     public const string LowCutoffAboveCorner = "CG1308";
 
+    /// <summary>noise.bandwidth_hz at or below a source's 1/f low cutoff.</summary>
+    public const string BandwidthBelowLowCutoff = "CG1310";
+
+    /// <summary>Warning: the analog bandwidth (pole or limit) is far below the ADC rate, e.g. a forgotten unit.</summary>
+    public const string BandwidthFarBelowRate = "CG1311";
+
+    /// <summary>Warning: the noise at one sample is so large that it alone spans the ADC's full scale.</summary>
+    public const string NoiseAboveFullScale = "CG1312";
+
+    /// <summary>Warning: a trapezoid's ramps do not fit in the window (ramp_samples more than half the window).</summary>
+    public const string RampLongerThanWindow = "CG1405";
+
     public const string ExplicitShape = "CG1401";
     public const string ShapeWithoutExplicit = "CG1402";
     public const string PoleStepWithoutPole = "CG1403";

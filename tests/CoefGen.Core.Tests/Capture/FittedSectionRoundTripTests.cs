@@ -23,7 +23,7 @@ public class FittedSectionRoundTripTests
         // The section prints 4 significant digits (FittedNoiseSection), so the values come back to 5e-4 relative.
         Assert.Equal(analysis.Fit.WhiteNvPerRtHz, source.WhiteNvPerRtHz, analysis.Fit.WhiteNvPerRtHz * 5e-4);
         Assert.Equal(analysis.Fit.Model.FlickerCornerHz, source.FlickerCornerHz, analysis.Fit.Model.FlickerCornerHz * 5e-4);
-        Assert.Equal(analysis.Fit.Model.PoleHz, reloaded.Description.Noise.FrontEndPoleHz!.Value, analysis.Fit.Model.PoleHz * 5e-4);
+        Assert.Equal(analysis.Fit.Model.PoleHz!.Value, reloaded.Description.Noise.FrontEndPoleHz!.Value, analysis.Fit.Model.PoleHz!.Value * 5e-4);
     }
 
     [Fact]

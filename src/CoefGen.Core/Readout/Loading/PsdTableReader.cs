@@ -65,6 +65,13 @@ internal static class PsdTableReader
                 continue;
             }
 
+            if (nv > PhysicalRange.MaxTableDensityNv || f > PhysicalRange.MaxTableFrequencyHz)
+            {
+                context.Error(ReadoutCodes.OutOfRange, location, "noise.psd_table",
+                    $"row {ValueReader.Format(f)} Hz, {ValueReader.Format(nv)} nV/rtHz is out of range; allowed: frequencies up to {ValueReader.Format(PhysicalRange.MaxTableFrequencyHz)} Hz, densities up to {ValueReader.Format(PhysicalRange.MaxTableDensityNv)} nV/rtHz");
+                continue;
+            }
+
             var amplitude = nv * 1e-9 * densityScale;
             frequencies.Add(f);
             densities.Add(amplitude * amplitude);
