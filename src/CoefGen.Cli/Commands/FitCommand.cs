@@ -59,15 +59,9 @@ internal static class FitCommand
             return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.TooFewSamples, file, $"--segment {l} must be a power of two >= 64")]);
         }
 
-        byte[] bytes;
-        try
+        if (InputFile.TryRead(capturePath, "capture", InputFile.CaptureLimit, file, CaptureCodes.Unreadable, null, out var problem) is not { } bytes)
         {
-            bytes = File.ReadAllBytes(capturePath);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            var reason = ex is FileNotFoundException or DirectoryNotFoundException ? "file not found" : ex.Message;
-            return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.Unreadable, file, $"cannot read the capture: {reason}")]);
+            return DiagnosticPrinter.PrintFailure(error, [problem!]);
         }
 
         var layout = stream ? CaptureLayout.Stream : CaptureLayout.PixelSynchronous;

@@ -74,15 +74,9 @@ internal static class SweepCommand
             return ExitCodes.BadInput;
         }
 
-        byte[] bytes;
-        try
+        if (InputFiles.ReadReadoutBytes(path, out var unreadable) is not { } bytes)
         {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
-        {
-            DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG0002", SourceLocation.FileOnly(path), "cannot read the readout file: " + ex.Message)]);
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.PrintFailure(error, [unreadable!]);
         }
 
         var text = new UTF8Encoding(false).GetString(bytes);
@@ -175,18 +169,6 @@ internal static class SweepCommand
     private static DesignPoint PointFor(string readoutPath)
     {
         var baseDir = Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";
-        return new DesignPoint(readoutPath, relative => ReadRelative(baseDir, relative), InputFiles.LoadTargets());
-    }
-
-    private static byte[]? ReadRelative(string baseDir, string relative)
-    {
-        try
-        {
-            return File.ReadAllBytes(Path.Combine(baseDir, relative));
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            return null;
-        }
+        return new DesignPoint(readoutPath, relative => InputFiles.ReadRelative(baseDir, relative, out _), InputFiles.LoadTargets());
     }
 }
