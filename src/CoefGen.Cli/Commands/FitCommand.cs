@@ -83,11 +83,17 @@ internal static class FitCommand
 
         if (outDir is not null)
         {
-            AtomicFile.WriteAllText(Path.Combine(outDir, "fit_spectrum.csv"), FitFiles.SpectrumCsv(analysis));
-            AtomicFile.WriteAllText(Path.Combine(outDir, "fit_spectrum.svg"), FitFiles.SpectrumSvg(analysis));
+            using var batch = new OutputBatch();
+            batch.Add(outDir, "--out", "fit_spectrum.csv", AtomicFile.Encode(FitFiles.SpectrumCsv(analysis)), "--out");
+            batch.Add(outDir, "--out", "fit_spectrum.svg", AtomicFile.Encode(FitFiles.SpectrumSvg(analysis)), "--out");
             if (analysis.Validation.Count > 0)
             {
-                AtomicFile.WriteAllText(Path.Combine(outDir, "fit_weights.csv"), FitFiles.WeightsCsv(analysis));
+                batch.Add(outDir, "--out", "fit_weights.csv", AtomicFile.Encode(FitFiles.WeightsCsv(analysis)), "--out");
+            }
+
+            if (batch.Commit(error) is null)
+            {
+                return ExitCodes.BadInput;
             }
         }
 

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using System.Text;
+using CoefGen.Cli.Diagnostics;
 using CoefGen.Cli.Io;
 using CoefGen.Cli.Output;
 using CoefGen.Core.Diagnostics;
@@ -59,6 +60,12 @@ internal static class SweepCommand
                 return ExitCodes.BadInput;
             }
 
+            if (axes.Any(a => a.Key == axis.Key))
+            {
+                return DiagnosticPrinter.Fail(error, CliCodes.SweepDuplicateKey, "--vary",
+                    $"'{SafeText.Excerpt(axis.Key)}' is varied twice; give all its values in one --vary (a,b,c or START:STOP:STEP)");
+            }
+
             axes.Add(axis);
         }
 
@@ -111,6 +118,11 @@ internal static class SweepCommand
             }
         }
 
+        if (SweepChecks.UnknownKey(text, path, axes) is { } unknown)
+        {
+            return DiagnosticPrinter.PrintFailure(error, [unknown]);
+        }
+
         SweepResult? sweep = null;
         if (axes.Count > 0)
         {
@@ -118,18 +130,31 @@ internal static class SweepCommand
             var bar = ReferenceEquals(error, Console.Error) && !Console.IsErrorRedirected ? new SweepProgress(error, total) : null;
             sweep = Sweep.Run(text, point, axes, progress: bar is null ? null : bar.Report);
             bar?.Finish();
+            if (sweep.Points.All(p => !p.Outcome.Valid))
+            {
+                return DiagnosticPrinter.PrintFailure(error, SweepChecks.AllInvalid(sweep));
+            }
         }
 
         var targetResult = target is double x ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
         var splitResult = split ? PixelSplitSearch.Run(text, baseline!, point, chosen!.Value) : null;
-        if (sweep is not null && csvPath is not null)
+        if (sweep is not null && (csvPath is not null || plotPath is not null))
         {
-            AtomicFile.WriteAllText(csvPath, SweepCsv.Render(sweep));
-        }
+            using var batch = new OutputBatch();
+            if (csvPath is not null)
+            {
+                AddFile(batch, csvPath, "--csv", SweepCsv.Render(sweep));
+            }
 
-        if (sweep is not null && plotPath is not null)
-        {
-            AtomicFile.WriteAllText(plotPath, SweepPlot.Render(sweep));
+            if (plotPath is not null)
+            {
+                AddFile(batch, plotPath, "--plot", SweepPlot.Render(sweep));
+            }
+
+            if (batch.Commit(error) is null)
+            {
+                return ExitCodes.BadInput;
+            }
         }
 
         if (json)
@@ -156,6 +181,12 @@ internal static class SweepCommand
 
         output.Write(string.Join("\n", parts));
         return ExitCodes.Ok;
+    }
+
+    private static void AddFile(OutputBatch batch, string path, string option, string text)
+    {
+        var full = Path.GetFullPath(path);
+        batch.Add(Path.GetDirectoryName(full)!, option, Path.GetFileName(full), AtomicFile.Encode(text), option);
     }
 
     private static WeightScheme? ParseScheme(string word) => word switch
