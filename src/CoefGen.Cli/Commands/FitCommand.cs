@@ -51,12 +51,12 @@ internal static class FitCommand
             case "raw16": encoding = CaptureEncoding.Raw16; break;
             case "raw32": encoding = CaptureEncoding.Raw32; break;
             default:
-                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.WrongLayout, file, $"--format '{format}' is not allowed; allowed: csv, raw16, raw32")]);
+                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.WrongLayout, SourceLocation.FileOnly("--format"), $"--format '{format}' is not allowed; allowed: csv, raw16, raw32")]);
         }
 
         if (segment is int l && (l < 64 || (l & (l - 1)) != 0))
         {
-            return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.TooFewSamples, file, $"--segment {l} must be a power of two >= 64")]);
+            return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.TooFewSamples, SourceLocation.FileOnly("--segment"), $"--segment {l} must be a power of two >= 64")]);
         }
 
         if (InputFile.TryRead(capturePath, "capture", InputFile.CaptureLimit, file, CaptureCodes.Unreadable, null, out var problem) is not { } bytes)

@@ -46,8 +46,7 @@ internal static class SweepCommand
     {
         if (vary.Length == 0 && target is null && !split)
         {
-            error.WriteLine("error: give --vary KEY=VALUES, --target-noise-e X or --split-pixel-time (see coefgen sweep --help)");
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "sweep", "give --vary KEY=VALUES, --target-noise-e X or --split-pixel-time (see coefgen sweep --help)");
         }
 
         var axes = new List<SweepAxis>();
@@ -56,8 +55,7 @@ internal static class SweepCommand
             var axis = SweepAxis.TryParse(spec, out var problem);
             if (axis is null)
             {
-                error.WriteLine($"error: --vary {problem}");
-                return ExitCodes.BadInput;
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--vary", SafeText.Excerpt(problem ?? "cannot read the spec", 300));
             }
 
             if (axes.Any(a => a.Key == axis.Key))
@@ -71,14 +69,12 @@ internal static class SweepCommand
 
         if (axes.Aggregate(1L, (n, a) => n * a.Values.Count) > Sweep.MaxPoints)
         {
-            error.WriteLine($"error: the grid has more than {Sweep.MaxPoints.ToString(CultureInfo.InvariantCulture)} points; use fewer values");
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--vary", $"the grid has more than {Sweep.MaxPoints.ToString(CultureInfo.InvariantCulture)} points; use fewer values");
         }
 
         if ((csvPath is not null || plotPath is not null) && axes.Count == 0)
         {
-            error.WriteLine("error: --csv and --plot need at least one --vary");
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.Fail(error, CliCodes.BadOption, csvPath is not null ? "--csv" : "--plot", "--csv and --plot need at least one --vary");
         }
 
         if (InputFiles.ReadReadoutBytes(path, out var unreadable) is not { } bytes)
@@ -107,14 +103,12 @@ internal static class SweepCommand
             chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
             if (chosen is null)
             {
-                error.WriteLine($"error: --scheme '{schemeWord}': expected boxcar, weighted or optimal");
-                return ExitCodes.BadInput;
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--scheme", $"'{SafeText.Excerpt(schemeWord ?? "")}': expected boxcar, weighted or optimal");
             }
 
             if (target is double t && !(t > 0 && double.IsFinite(t)))
             {
-                error.WriteLine("error: --target-noise-e must be a positive number of electrons");
-                return ExitCodes.BadInput;
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--target-noise-e", "must be a positive number of electrons");
             }
         }
 
