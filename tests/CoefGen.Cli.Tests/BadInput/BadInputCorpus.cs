@@ -95,6 +95,7 @@ internal static class BadInputCorpus
         new("emit-out-unwritable", s => ["emit", s.Fast, "--out", "/proc/coefgen-out"], CliCodes.OutputNotWritable, _ => "--out"),
         new("emit-template-out-too-long", s => ["emit", s.Fast, "--out", s.Path("o"), "--template", Path.Combine(RepoPaths.Root, "templates", "c-header.h.scriban"), "--template-out", Long], CliCodes.OutputNameTooLong, _ => "--template-out"),
         new("emit-path-too-long", s => ["emit", s.Edit("fast_imaging.toml", VhPath, $"path = \"{Long}.vh\"")], CliCodes.OutputNameTooLong, s => At(s, "edited_fast_imaging.toml", Long)),
+        new("emit-name-too-long", s => ["emit", s.Edit("fast_imaging.toml", "name = \"tile7_v3\"", $"name = \"t{Long}\""), "-f", "c-header", "--out", s.Path("o")], CliCodes.OutputNameTooLong, s => At(s, "edited_fast_imaging.toml", "name =")),
         new("emit-out-name-too-long", s => ["emit", s.Fast, "--out", s.Path(Long)], CliCodes.OutputNameTooLong, _ => "--out"),
         new("emit-through-a-link-outside", s => { s.Link("tile7_v3_coefs.vh", Path.Combine(Path.GetTempPath(), "coefgen-outside-" + Guid.NewGuid().ToString("N") + ".vh")); return ["emit", s.Fast]; }, CliCodes.OutputEscapes, s => At(s, "fast_imaging.toml", VhPath)),
         new("emit-through-a-linked-folder-outside", s => { s.Link("lnk", RepoPaths.TempDir()); return ["emit", s.Edit("fast_imaging.toml", VhPath, "path = \"lnk/x.vh\"")]; }, CliCodes.OutputEscapes, s => At(s, "edited_fast_imaging.toml", "lnk/x.vh")),
