@@ -51,7 +51,7 @@ internal static class FitCommand
             case "raw16": encoding = CaptureEncoding.Raw16; break;
             case "raw32": encoding = CaptureEncoding.Raw32; break;
             default:
-                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.WrongLayout, SourceLocation.FileOnly("--format"), $"--format '{format}' is not allowed; allowed: csv, raw16, raw32")]);
+                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.WrongLayout, SourceLocation.FileOnly("--format"), $"'{SafeText.Excerpt(format)}' is not allowed; allowed: csv, raw16, raw32")]);
         }
 
         if (segment is int l && (l < 64 || (l & (l - 1)) != 0))

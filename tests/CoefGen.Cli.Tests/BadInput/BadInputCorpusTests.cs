@@ -11,7 +11,7 @@ public class BadInputCorpusTests
     public void A_bad_input_is_a_located_diagnostic_with_its_exit_code_and_the_folder_stays_byte_identical(string name)
     {
         var c = BadInputCorpus.All.Single(x => x.Name == name);
-        var sandbox = new Sandbox();
+        using var sandbox = new Sandbox();
         var args = c.Arrange(sandbox);
         var location = c.Location(sandbox);
         var before = sandbox.Fingerprint();

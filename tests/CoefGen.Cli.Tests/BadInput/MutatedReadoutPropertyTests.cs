@@ -21,7 +21,7 @@ public partial class MutatedReadoutPropertyTests
         Prop.ForAll(Gen.Choose(0, int.MaxValue).ToArbitrary(), seed =>
         {
             var random = new Random(seed);
-            var sandbox = new Sandbox();
+            using var sandbox = new Sandbox();
             var example = Examples[random.Next(Examples.Length)];
             var lines = File.ReadAllLines(sandbox.Path(example)).ToList();
             var applied = new List<string>();

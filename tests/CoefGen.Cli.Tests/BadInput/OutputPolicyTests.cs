@@ -8,7 +8,7 @@ public class OutputPolicyTests
     [Fact]
     public void A_file_whose_bytes_do_not_change_keeps_its_modification_time_and_a_changed_one_is_replaced()
     {
-        var s = new Sandbox();
+        using var s = new Sandbox();
         Assert.Equal(0, CliRunner.Run("emit", s.Fast).ExitCode);
         var same = s.Path("tile7_v3_coefs.vh");
         var changed = s.Path("tile7_v3_coefs_pkg.sv");
@@ -30,7 +30,7 @@ public class OutputPolicyTests
     [Fact]
     public void A_new_nested_output_folder_appears_whole_and_a_link_that_stays_inside_is_written_through()
     {
-        var s = new Sandbox();
+        using var s = new Sandbox();
         var deep = s.Path("build/gen/rtl");
         var r = CliRunner.Run("vectors", s.Fast, "--out", deep, "--pixels", "20", "--no-rtl");
         Assert.True(r.ExitCode == 0, r.Error);
@@ -48,7 +48,7 @@ public class OutputPolicyTests
     [System.Runtime.Versioning.UnsupportedOSPlatform("windows")]
     public void A_read_only_output_folder_is_CG0031_and_stays_empty()
     {
-        var s = new Sandbox();
+        using var s = new Sandbox();
         var ro = s.Dir("ro");
         File.SetUnixFileMode(ro, UnixFileMode.UserRead | UnixFileMode.UserExecute);
         try

@@ -6,7 +6,7 @@ using CoefGen.Cli.Io;
 namespace CoefGen.Cli.Tests.BadInput;
 
 /// <summary>A fresh folder holding a copy of examples/, with helpers to plant bad inputs and to fingerprint the tree.</summary>
-internal sealed class Sandbox
+internal sealed class Sandbox : IDisposable
 {
     public Sandbox()
     {
@@ -100,6 +100,19 @@ internal sealed class Sandbox
         }
 
         return sb.ToString();
+    }
+
+    /// <summary>Removes the sandbox (links are removed, not followed).</summary>
+    public void Dispose()
+    {
+        try
+        {
+            Directory.Delete(Root, recursive: true);
+        }
+        catch (IOException)
+        {
+            // A leftover temporary folder is harmless.
+        }
     }
 
     [DllImport("libc", EntryPoint = "mkfifo")]
