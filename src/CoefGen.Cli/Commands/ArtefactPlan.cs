@@ -82,7 +82,7 @@ internal static class ArtefactPlan
         var userBase = Path.GetDirectoryName(Path.GetFullPath(r.Description.SourcePath)) ?? ".";
         var unreadable = entries.Where(e => !BuiltinTemplates.TryGet(e.Template, out _))
             .Select(e => InputFile.TryRead(Path.Combine(userBase, e.Template), "template", InputFile.TemplateLimit,
-                SourceLocation.FileOnly(e.Template), TemplateDiagnosticCodes.TemplateNotFound, null, out var problem) is null ? problem : null)
+                TemplateLocation(r, e.Template), TemplateDiagnosticCodes.TemplateNotFound, null, out var problem) is null ? problem : null)
             .OfType<Diagnostic>().ToList();
         if (unreadable.Count > 0)
         {
@@ -100,6 +100,13 @@ internal static class ArtefactPlan
 
         DiagnosticPrinter.Print(error, result.Diagnostics);
         return result.Artefacts;
+    }
+
+    /// <summary>Where a template path was written: its [[emit]] entry in the readout file, else the path itself (--template).</summary>
+    private static SourceLocation TemplateLocation(DesignResult r, string template)
+    {
+        var i = r.Description.Emit.ToList().FindIndex(e => e.Template == template);
+        return i >= 0 ? r.Description.LocationOf($"emit[{i}].template") : SourceLocation.FileOnly(template);
     }
 
     public static string DefaultOutDir(string readoutPath) => Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";

@@ -85,7 +85,7 @@ internal static class BadInputCorpus
         new("template-is-dev-zero", s => ["emit", s.Fast, "--out", s.Path("o"), "--template", "/dev/zero", "--template-out", "z.h"], CliCodes.InputNotRegular, _ => "/dev/zero"),
         new("template-missing", s => ["emit", s.Fast, "--out", s.Path("o"), "--template", s.Path("nope.h.scriban")], TemplateDiagnosticCodes.TemplateNotFound, s => s.Path("nope.h.scriban")),
         new("template-too-large", s => ["emit", s.Fast, "--out", s.Path("o"), "--template", s.Sparse("big.h.scriban", 5L << 20)], CliCodes.InputTooLarge, s => s.Path("big.h.scriban")),
-        new("emit-entry-template-missing", s => ["emit", s.Edit("fast_imaging.toml", "template = \"sv-package\"", "template = \"missing.sv.scriban\"")], TemplateDiagnosticCodes.TemplateNotFound, _ => "missing.sv.scriban"),
+        new("emit-entry-template-missing", s => ["emit", s.Edit("fast_imaging.toml", "template = \"sv-package\"", "template = \"missing.sv.scriban\"")], TemplateDiagnosticCodes.TemplateNotFound, s => At(s, "edited_fast_imaging.toml", "missing.sv.scriban")),
 
         // Output destinations: nothing written, not even the files that could have been.
         new("emit-second-target-is-a-folder", s => { s.Dir("tile7_v3_coefs.vh"); return ["emit", s.Fast]; }, CliCodes.OutputIsDirectory, s => At(s, "fast_imaging.toml", VhPath)),
