@@ -85,6 +85,7 @@ internal static class BadInputCorpus
         new("template-is-dev-zero", s => ["emit", s.Fast, "--out", s.Path("o"), "--template", "/dev/zero", "--template-out", "z.h"], CliCodes.InputNotRegular, _ => "/dev/zero"),
         new("template-missing", s => ["emit", s.Fast, "--out", s.Path("o"), "--template", s.Path("nope.h.scriban")], TemplateDiagnosticCodes.TemplateNotFound, s => s.Path("nope.h.scriban")),
         new("template-too-large", s => ["emit", s.Fast, "--out", s.Path("o"), "--template", s.Sparse("big.h.scriban", 5L << 20)], CliCodes.InputTooLarge, s => s.Path("big.h.scriban")),
+        new("template-include-too-large", s => { s.Sparse("big.inc", 5L << 20); return ["emit", s.Fast, "--out", s.Path("o"), "--template", s.Write("inc.h.scriban", "// x\n{{ include 'big.inc' }}\n")]; }, TemplateDiagnosticCodes.IncludeRefused, s => s.Path("inc.h.scriban") + ":2:"),
         new("emit-entry-template-missing", s => ["emit", s.Edit("fast_imaging.toml", "template = \"sv-package\"", "template = \"missing.sv.scriban\"")], TemplateDiagnosticCodes.TemplateNotFound, s => At(s, "edited_fast_imaging.toml", "missing.sv.scriban")),
 
         // Output destinations: nothing written, not even the files that could have been.
