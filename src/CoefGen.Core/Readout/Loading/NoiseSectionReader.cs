@@ -1,4 +1,5 @@
 using System.Globalization;
+using CoefGen.Core.Diagnostics;
 
 namespace CoefGen.Core.Readout.Loading;
 
@@ -123,11 +124,12 @@ internal static class NoiseSectionReader
         var context = noise.Context;
         var location = noise.Entry("psd_table")!.ValueLocation;
         var csvFile = CsvName(context.File, path);
-        var content = context.ReadRelative(path);
+        var content = context.ReadRelative(path, out var problem);
         if (content is null)
         {
+            var reason = problem is null ? "" : $": {problem}";
             context.Error(ReadoutCodes.PsdTableUnreadable, location, noise.KeyPath("psd_table"),
-                $"cannot read the spectrum table '{csvFile}'; give a CSV file relative to the readout file");
+                $"cannot read the spectrum table '{SafeText.Excerpt(csvFile, 200)}'{reason}; give a CSV file relative to the readout file");
             return null;
         }
 
