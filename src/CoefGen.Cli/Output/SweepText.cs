@@ -9,14 +9,20 @@ internal static class SweepText
 {
     public static string Render(SweepResult r)
     {
+        var firstValid = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid);
         // Every point designs all three schemes; the columns stay when no point is valid.
-        var schemes = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid)?.Schemes.Select(s => s.Scheme).ToList() ?? [.. Enum.GetValues<WeightScheme>()];
+        var schemes = firstValid?.Schemes.Select(s => s.Scheme).ToList() ?? [.. Enum.GetValues<WeightScheme>()];
+        var regret = firstValid?.Schemes.All(s => s.WorstRegret is not null) == true;
         var header = new List<string>();
         header.AddRange(r.Axes.Select(a => a.Key));
         foreach (var s in schemes)
         {
             header.Add($"{DesignText.SchemeWord(s)} e-");
             header.Add($"{DesignText.SchemeWord(s)} ADU");
+            if (regret)
+            {
+                header.Add($"{DesignText.SchemeWord(s)} worst x");
+            }
         }
 
         header.AddRange(["integer design", "gain err ppm", "penalty %"]);
@@ -44,6 +50,10 @@ internal static class SweepText
             {
                 row.Add(Eng.Num(s.NoiseElectrons, 4));
                 row.Add(Eng.Num(s.NoiseAdu, 4));
+                if (regret)
+                {
+                    row.Add(s.WorstRegret is double x ? "x" + Eng.Num(x, 5) : "");
+                }
             }
 
             row.Add($"{DesignText.SchemeWord(o.Chosen)} {(o.Safe ? "safe" : "NOT SAFE")}");

@@ -11,12 +11,13 @@ namespace CoefGen.Core.Study;
 /// </summary>
 public static class ChartPalette
 {
-    /// <summary>Boxcar, weighted, optimal (index = <see cref="WeightScheme"/>).</summary>
+    /// <summary>Boxcar, weighted, optimal, robust (index = <see cref="WeightScheme"/>).</summary>
     public static readonly IReadOnlyList<ChartStyle> Schemes =
     [
         new("#e69a2e", "9 4", 2.2),
         new("#b0417f", "2 3", 2.2),
         new("#14336b", "", 2.2),
+        new("#c61028", "8 3 1 3", 2.2),
     ];
 
     /// <summary>The noise sources of a readout in their order in the file (and in the budget), cycling when there are more.</summary>

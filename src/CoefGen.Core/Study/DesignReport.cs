@@ -13,7 +13,7 @@ namespace CoefGen.Core.Study;
 /// </summary>
 public static class DesignReport
 {
-    internal static readonly string[] SchemeWords = ["boxcar", "weighted", "optimal"];
+    internal static readonly string[] SchemeWords = ["boxcar", "weighted", "optimal", "robust"];
 
     /// <summary>The report's sections in page order; an entry returning null is left out for this design.</summary>
     private static readonly Func<DesignResult, ReportContext, ReportSection?>[] Sections =
@@ -22,6 +22,7 @@ public static class DesignReport
         (r, _) => Description(r),
         (r, _) => Sources(r),
         (r, _) => Noise(r),
+        (r, _) => RegretReportSection.For(r) is [var regret] ? regret : null,
         (r, _) => ReportCharts.Weights(r),
         (r, _) => ReportCharts.Spectra(r),
         (r, _) => ReportCharts.Contribution(r),
@@ -154,7 +155,7 @@ public static class DesignReport
     private static ReportSection Noise(DesignResult r)
     {
         var rows = new List<IReadOnlyList<ReportCell>> { new[] { T("scheme"), T("at the ADC"), T("in ADU"), T("in electrons"), T("vs optimal"), T("chosen") } };
-        var optimal = r.Predictions[^1].SigmaV;
+        var optimal = r.Predictions.First(p => p.Scheme == WeightScheme.Optimal).SigmaV;
         for (var i = 0; i < r.Predictions.Count; i++)
         {
             var p = r.Predictions[i];

@@ -67,6 +67,7 @@ public sealed class SvgLineChart
         var y2Ticks = Y2Factor is double f ? (YLog ? ChartTicks.Log(y0 * f, y1 * f) : ChartTicks.Linear(y0 * f, y1 * f)) : [];
         var y2Labels = y2Ticks.Select(t => ChartTicks.Label(t, YUnit)).ToList();
         var right = Y2Factor is null ? 24 : 40 + (CharWidth * Math.Max(4, y2Labels.Max(l => (int?)TickLength(l)) ?? 0));
+        right = Math.Max(right, 6 + (CharWidth * (xTicks.Select(t => TickLength(ChartTicks.Label(t, XUnit))).DefaultIfEmpty(0).Max() + 1) / 2)); // the last x label is centred on the edge
         var pw = Width - left - right;
         var ph = Height - Top - Bottom;
         var legend = Series.Select(s => Wrap(s.Name, (int)((Width - left - 40) / CharWidth))).ToList();
