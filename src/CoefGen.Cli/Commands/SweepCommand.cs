@@ -160,12 +160,10 @@ internal static class SweepCommand
             (json ? error : output).WriteLine(line);
         }
 
-        var noneValid = sweep is not null && sweep.Points.All(p => !p.Outcome.Valid);
-
         if (json)
         {
             output.Write(SweepJson.Render(sweep, targetResult, splitResult));
-            return NoneValid(noneValid, error);
+            return ExitCodes.Ok;
         }
 
         var parts = new List<string>();
@@ -185,18 +183,7 @@ internal static class SweepCommand
         }
 
         output.Write(string.Join("\n", parts));
-        return NoneValid(noneValid, error);
-    }
-
-    private static int NoneValid(bool noneValid, TextWriter error)
-    {
-        if (!noneValid)
-        {
-            return ExitCodes.Ok;
-        }
-
-        error.WriteLine("error: no point of the sweep is a valid readout (each point's diagnostics are listed with the table)");
-        return ExitCodes.BadInput;
+        return ExitCodes.Ok;
     }
 
     private static void AddFile(OutputBatch batch, string path, string option, string text)

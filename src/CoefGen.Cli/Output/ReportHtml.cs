@@ -106,7 +106,7 @@ internal static class ReportHtml
     private static string E(string s) => WebUtility.HtmlEncode(s);
 
     /// <summary>Escaped prose with `command` spans as code.</summary>
-    private static string Code(string s) => System.Text.RegularExpressions.Regex.Replace(E(s), "`([^`]+)`", "<code>$1</code>");
+    private static string Code(string s) => System.Text.RegularExpressions.Regex.Replace(Q(s), "`([^`]+)`", "<code>$1</code>");
 
     /// <summary>A quantity's text for the page: "x 10^-9" as a superscript power, V^2 as V², rtHz as √Hz, u as µ.</summary>
     private static string Q(string s)

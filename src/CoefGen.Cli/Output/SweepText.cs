@@ -1,5 +1,4 @@
 using System.Text;
-using CoefGen.Core.Readout;
 using CoefGen.Core.Study;
 
 namespace CoefGen.Cli.Output;
@@ -10,8 +9,7 @@ internal static class SweepText
     public static string Render(SweepResult r)
     {
         var firstValid = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid);
-        // Every point designs all three schemes; the columns stay when no point is valid.
-        var schemes = firstValid?.Schemes.Select(s => s.Scheme).ToList() ?? [.. Enum.GetValues<WeightScheme>()];
+        var schemes = firstValid?.Schemes.Select(s => s.Scheme).ToList() ?? [];
         var regret = firstValid?.Schemes.All(s => s.WorstRegret is not null) == true;
         var header = new List<string>();
         header.AddRange(r.Axes.Select(a => a.Key));

@@ -43,6 +43,9 @@ public static class ChartPalette
     /// <summary>The ADC's own noise, a bar next to quantisation in the budget (bars carry their names, so colour is not the only cue).</summary>
     public static readonly ChartStyle AdcNoise = new("#4f4f4f", "1 2");
 
+    /// <summary>A reference curve drawn beside the schemes (each scenario's own optimum).</summary>
+    public static readonly ChartStyle Reference = new("#5a5a5a", "2 2 8 2");
+
     /// <summary>Markers (transfer instant) and other annotations.</summary>
     public const string Annotation = "#444444";
 

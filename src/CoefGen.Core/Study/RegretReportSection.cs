@@ -71,6 +71,8 @@ public static class RegretReportSection
             YLabel = "read noise / own optimum",
             XLog = xLog,
             XUnit = xUnit,
+            XMin = xLog ? x[0] : null,
+            XMax = xLog ? x[^1] : null,
             Series = [.. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.Ratio[i])], Style: ChartPalette.Scheme(row.Scheme)))],
         }.Render();
         var chart = new SvgLineChart
@@ -80,10 +82,12 @@ public static class RegretReportSection
             YLabel = "read noise (e- rms)",
             XLog = xLog,
             XUnit = xUnit,
+            XMin = xLog ? x[0] : null,
+            XMax = xLog ? x[^1] : null,
             Series =
             [
                 .. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.SigmaElectrons[i])], Style: ChartPalette.Scheme(row.Scheme))),
-                new ChartSeries("own optimum of each scenario", x, [.. order.Select(i => t.OptimumElectrons[i])], Style: ChartPalette.Model),
+                new ChartSeries("own optimum of each scenario", x, [.. order.Select(i => t.OptimumElectrons[i])], Style: ChartPalette.Reference),
             ],
         }.Render();
         var robust = t.Robust;

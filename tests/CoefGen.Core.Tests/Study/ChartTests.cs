@@ -39,7 +39,7 @@ public class ChartTests
     [Fact]
     public void Every_palette_entry_has_its_own_dash_pattern()
     {
-        var all = ChartPalette.Schemes.Concat(ChartPalette.Sources).Append(ChartPalette.Total).Append(ChartPalette.Digital).Append(ChartPalette.Model).Append(ChartPalette.AdcNoise).ToList();
+        var all = ChartPalette.Schemes.Concat(ChartPalette.Sources).Append(ChartPalette.Total).Append(ChartPalette.Digital).Append(ChartPalette.Model).Append(ChartPalette.AdcNoise).Append(ChartPalette.Reference).ToList();
         Assert.Equal(all.Count, all.Select(s => s.Dash).Distinct().Count() + 1); // the optimal scheme and the total are both solid, never in one chart
         Assert.Equal(all.Count, all.Select(s => s.Colour).Distinct().Count());
     }
