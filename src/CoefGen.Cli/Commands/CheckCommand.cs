@@ -21,6 +21,11 @@ internal static class CheckCommand
         cmd.SetAction(parse =>
         {
             var path = parse.GetRequiredValue(file).ToString();
+            if (InstrumentRunner.IsInstrument(path))
+            {
+                return InstrumentCommands.Check(path, parse.GetValue(outDir)?.FullName, output, error);
+            }
+
             var result = DesignRunner.TryRun(path, error);
             if (result is null)
             {

@@ -14,7 +14,7 @@ namespace CoefGen.Core.Emit;
 /// </summary>
 public sealed class TemplateModel
 {
-    private TemplateModel(ScriptObject globals, string prefix, int largestArray)
+    internal TemplateModel(ScriptObject globals, string prefix, int largestArray)
     {
         Globals = globals;
         Prefix = prefix;

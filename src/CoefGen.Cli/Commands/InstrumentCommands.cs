@@ -1,0 +1,86 @@
+using CoefGen.Cli.Io;
+using CoefGen.Cli.Output;
+using CoefGen.Core.Emit;
+
+namespace CoefGen.Cli.Commands;
+
+/// <summary>design, emit and check when their file is an instrument file: every table at once.</summary>
+internal static class InstrumentCommands
+{
+    public static int Design(string path, bool json, TextWriter output, TextWriter error)
+    {
+        var design = InstrumentRunner.TryRun(path, error);
+        if (design is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        output.Write(json ? InstrumentJson.Render(design) : InstrumentText.Render(design));
+        return ExitCodes.Ok;
+    }
+
+    public static int Emit(string path, string? outDir, bool allowUnsafe, TextWriter output, TextWriter error)
+    {
+        var design = InstrumentRunner.TryRun(path, error);
+        if (design is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        foreach (var t in design.Tables)
+        {
+            if (UnsafeDesign.Refuse(t.Result, allowUnsafe, error) is int refused)
+            {
+                error.WriteLine($"  (table {t.Label})");
+                return refused;
+            }
+        }
+
+        var artefacts = InstrumentArtefacts.Render(design, error);
+        if (artefacts is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        var dir = outDir ?? ArtefactPlan.DefaultOutDir(path);
+        foreach (var a in artefacts)
+        {
+            var target = Path.Combine(dir, a.RelativePath);
+            AtomicFile.WriteAllBytes(target, a.ToBytes());
+            output.WriteLine($"wrote {Path.GetRelativePath(Directory.GetCurrentDirectory(), target)}");
+        }
+
+        return ExitCodes.Ok;
+    }
+
+    public static int Check(string path, string? outDir, TextWriter output, TextWriter error)
+    {
+        var design = InstrumentRunner.TryRun(path, error);
+        var artefacts = design is null ? null : InstrumentArtefacts.Render(design, error);
+        if (artefacts is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        var dir = outDir ?? ArtefactPlan.DefaultOutDir(path);
+        var entries = StalenessCheck.Compare(artefacts, rel =>
+        {
+            var p = Path.Combine(dir, rel);
+            return File.Exists(p) ? File.ReadAllBytes(p) : null;
+        });
+        foreach (var e in entries)
+        {
+            var word = e.Status switch
+            {
+                StalenessStatus.UpToDate => "up to date",
+                StalenessStatus.Stale => "STALE (differs from what the instrument file gives; run coefgen emit)",
+                _ => "MISSING (run coefgen emit)",
+            };
+            output.WriteLine($"{e.RelativePath}: {word}");
+        }
+
+        var stale = entries.Count(e => e.Status != StalenessStatus.UpToDate);
+        output.WriteLine(stale == 0 ? $"all {entries.Count} files up to date" : $"{stale} of {entries.Count} files stale or missing");
+        return stale == 0 ? ExitCodes.Ok : ExitCodes.Difference;
+    }
+}
