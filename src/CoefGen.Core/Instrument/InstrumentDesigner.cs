@@ -37,6 +37,7 @@ public static class InstrumentDesigner
 
         var baseText = Encoding.UTF8.GetString(baseContent).TrimStart('\uFEFF');
         var bag = new DiagnosticBag();
+        var problems = new List<(string Label, Diagnostic Diagnostic)>();
         var found = new List<(InstrumentTable Table, IReadOnlyList<Diagnostic> Diagnostics)>();
         var first = new List<InstrumentTable>();
         foreach (var (m, c) in spec.Tables)
@@ -55,7 +56,7 @@ public static class InstrumentDesigner
             var loadProblems = load.Diagnostics.Select(relocate.Apply).ToArray();
             if (load.Description is null || loadProblems.Any(d => d.Severity == Severity.Error))
             {
-                Report(bag, label, loadProblems);
+                problems.AddRange(loadProblems.Select(d => (label, d)));
                 continue;
             }
 
@@ -68,12 +69,13 @@ public static class InstrumentDesigner
             }
             catch (InputException ex)
             {
-                Report(bag, label, ex.Diagnostics.Select(relocate.Apply).ToArray());
+                problems.AddRange(ex.Diagnostics.Select(d => (label, relocate.Apply(d))));
             }
         }
 
-        if (bag.HasErrors)
+        if (bag.HasErrors || problems.Any(p => p.Diagnostic.Severity == Severity.Error))
         {
+            bag.AddRange(Grouped(problems, spec.Tables.Count));
             throw new InputException(bag.Items);
         }
 
@@ -85,11 +87,7 @@ public static class InstrumentDesigner
 
         var f = settings.OutputFracBits!.Value;
         var tables = first.Select(t => t with { Result = DesignPipeline.WithSettings(t.Result, settings) }).ToArray();
-        var warnings = new DiagnosticBag();
-        foreach (var group in found.SelectMany(x => x.Diagnostics.Select(d => (x.Table.Label, d))).GroupBy(x => x.d).OrderBy(g => g.Key.Location.Line))
-        {
-            warnings.Add(Prefixed(group.Key, Tables(group.Select(x => x.Label).ToArray(), first.Count)));
-        }
+        var warnings = Grouped(found.SelectMany(x => x.Diagnostics.Select(d => (x.Table.Label, d))), first.Count);
 
         return new InstrumentDesign
         {
@@ -100,7 +98,7 @@ public static class InstrumentDesigner
             OutputFracBits = f,
             Tables = tables,
             Widths = Widths(tables),
-            Warnings = warnings.Items,
+            Warnings = warnings,
         };
     }
 
@@ -157,13 +155,9 @@ public static class InstrumentDesigner
         })];
     }
 
-    private static void Report(DiagnosticBag bag, string label, IEnumerable<Diagnostic> diagnostics)
-    {
-        foreach (var d in diagnostics)
-        {
-            bag.Add(Prefixed(d, $"table {label}"));
-        }
-    }
+    /// <summary>One diagnostic per distinct problem, naming the tables it occurs in (a base warning is not repeated 16 times).</summary>
+    private static Diagnostic[] Grouped(IEnumerable<(string Label, Diagnostic Diagnostic)> items, int total) =>
+        [.. items.GroupBy(x => x.Diagnostic).Select(g => Prefixed(g.Key, Tables([.. g.Select(x => x.Label)], total)))];
 
     private static string Tables(string[] labels, int total) =>
         labels.Length == total && total > 1 ? "every table" : labels.Length == 1 ? $"table {labels[0]}" : $"tables {string.Join(", ", labels)}";
