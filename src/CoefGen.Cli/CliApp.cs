@@ -19,6 +19,7 @@ internal static class CliApp
             VectorsCommand.Create(output, error),
             VerifyCommand.Create(output, error),
             FitCommand.Create(output, error),
+            DiffCommand.Create(output, error),
         };
 
     public static int Run(string[] args, TextWriter output, TextWriter error)

@@ -21,11 +21,18 @@ internal static class InstrumentRunner
     }
 
     /// <summary>Designs every table; on bad input prints the diagnostics and returns null.</summary>
-    public static InstrumentDesign? TryRun(string path, TextWriter error) => TryRun(path, File.ReadAllBytes(path), error, null);
+    public static InstrumentDesign? TryRun(string path, TextWriter error) => TryRun(path, TryRead, error);
 
-    /// <summary>As <see cref="TryRun(string, TextWriter)"/> from given bytes; <paramref name="readBase"/> replaces reading the base from disk (a git revision).</summary>
-    public static InstrumentDesign? TryRun(string path, byte[] content, TextWriter error, Func<string, byte[]?>? readBase)
+    /// <summary>As <see cref="TryRun(string, TextWriter)"/> reading every file (instrument, base, files the base names) through <paramref name="read"/> (e.g. a git revision).</summary>
+    public static InstrumentDesign? TryRun(string path, Func<string, byte[]?> read, TextWriter error, bool frequencyCheck = true)
     {
+        var content = read(path);
+        if (content is null)
+        {
+            DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG0002", SourceLocation.FileOnly(path), "cannot read the instrument file")]);
+            return null;
+        }
+
         var load = InstrumentLoader.Load(content, path);
         if (load.Spec is not InstrumentSpec spec)
         {
@@ -34,19 +41,18 @@ internal static class InstrumentRunner
         }
 
         DiagnosticPrinter.Print(error, load.Diagnostics);
-        var dir = Path.GetDirectoryName(path) ?? "";
-        var basePath = Path.Combine(dir, spec.BasePath);
-        var baseBytes = readBase is null ? TryRead(basePath) : readBase(basePath);
+        var basePath = Path.Combine(Path.GetDirectoryName(path) ?? "", spec.BasePath);
+        var baseBytes = read(basePath);
         if (baseBytes is null)
         {
             DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(InstrumentCodes.BaseUnreadable, spec.BaseLocation, $"cannot read the base readout file '{spec.BasePath}'", "base")]);
             return null;
         }
 
-        var baseDir = Path.GetDirectoryName(Path.GetFullPath(basePath)) ?? ".";
+        var baseDir = Path.GetDirectoryName(basePath) ?? "";
         try
         {
-            var design = InstrumentDesigner.Design(spec, baseBytes, basePath, rel => readBase is null ? TryRead(Path.Combine(baseDir, rel)) : readBase(Path.Combine(Path.GetDirectoryName(basePath) ?? "", rel)), InputFiles.LoadTargets());
+            var design = InstrumentDesigner.Design(spec, baseBytes, basePath, rel => read(Path.Combine(baseDir, rel)), InputFiles.LoadTargets(), frequencyCheck);
             DiagnosticPrinter.Print(error, design.Warnings);
             return design;
         }
@@ -57,7 +63,8 @@ internal static class InstrumentRunner
         }
     }
 
-    private static byte[]? TryRead(string path)
+    /// <summary>The file's bytes, or null when it cannot be read.</summary>
+    public static byte[]? TryRead(string path)
     {
         try
         {

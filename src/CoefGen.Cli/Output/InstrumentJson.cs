@@ -97,7 +97,7 @@ internal static class InstrumentJson
         w.WriteStartObject("read_noise_e");
         foreach (var (scheme, e) in r.Noise)
         {
-            w.WriteNumber(scheme.Split(' ')[0], e);
+            w.WriteNumber(scheme, e);
         }
 
         w.WriteEndObject();

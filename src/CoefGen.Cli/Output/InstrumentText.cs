@@ -16,7 +16,7 @@ internal static class InstrumentText
 
         var rows = TableSummary.Of(design);
         var schemes = rows[0].Noise.Select(n => n.Scheme).ToArray();
-        var t = new TextTable(["table", "pixel", "samples", "windows", .. schemes.Select(n => FirstWord(n) + " e-"), "chosen", "penalty %", "coefs", "P", "shift", "margin"]);
+        var t = new TextTable(["table", "pixel", "samples", "windows", .. schemes.Select(n => n + " e-"), "chosen", "penalty %", "coefs", "P", "shift", "margin"]);
         foreach (var r in rows)
         {
             t.Add([r.Label, Eng.SiShort(r.PixelTimeS, "s"), Eng.Int(r.PixelSamples), Windows(r),

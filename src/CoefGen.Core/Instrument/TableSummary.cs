@@ -18,7 +18,7 @@ public sealed record TableSummary
     /// <summary>First and last cycle index of each run of consecutive weighted samples, in time order.</summary>
     public required IReadOnlyList<(int First, int Last)> Windows { get; init; }
 
-    /// <summary>Read noise in e- rms per scheme label, in the pipeline's scheme order.</summary>
+    /// <summary>Read noise in e- rms per scheme name (boxcar, weighted, optimal: the label's first word), in the pipeline's scheme order.</summary>
     public required IReadOnlyList<(string Scheme, double Electrons)> Noise { get; init; }
 
     public required string ChosenScheme { get; init; }
@@ -57,7 +57,7 @@ public sealed record TableSummary
             PixelTimeS = d.PixelSamples / r.Description.Adc.RateHz,
             PixelSamples = d.PixelSamples,
             Windows = Runs(d.SampleIndex),
-            Noise = [.. r.Predictions.Select(p => (p.Label, p.SigmaElectrons))],
+            Noise = [.. r.Predictions.Select(p => (p.Label.Split(' ')[0], p.SigmaElectrons))],
             ChosenScheme = r.ChosenPrediction.Label,
             PenaltyPercent = d.NoisePenaltyPercent,
             MarginBits = d.Proof.Checks.Where(c => c.Required && c.Name != "coefficient").Min(c => c.MarginBits),
