@@ -39,22 +39,7 @@ internal static class CheckCommand
             }
 
             var dir = parse.GetValue(outDir)?.FullName ?? ArtefactPlan.DefaultOutDir(path);
-            var entries = StalenessCheck.Compare(artefacts, rel =>
-            {
-                var p = Path.Combine(dir, rel);
-                return File.Exists(p) ? File.ReadAllBytes(p) : null;
-            });
-            foreach (var e in entries)
-            {
-                var word = e.Status switch
-                {
-                    StalenessStatus.UpToDate => "up to date",
-                    StalenessStatus.Stale => "STALE (differs from what the readout file gives; run coefgen emit)",
-                    _ => "MISSING (run coefgen emit)",
-                };
-                output.WriteLine($"{e.RelativePath}: {word}");
-            }
-
+            var entries = StalenessReport.Print(artefacts, dir, "the readout file", output);
             return StalenessCheck.AllUpToDate(entries) ? ExitCodes.Ok : ExitCodes.Difference;
         });
         return cmd;

@@ -63,22 +63,7 @@ internal static class InstrumentCommands
         }
 
         var dir = outDir ?? ArtefactPlan.DefaultOutDir(path);
-        var entries = StalenessCheck.Compare(artefacts, rel =>
-        {
-            var p = Path.Combine(dir, rel);
-            return File.Exists(p) ? File.ReadAllBytes(p) : null;
-        });
-        foreach (var e in entries)
-        {
-            var word = e.Status switch
-            {
-                StalenessStatus.UpToDate => "up to date",
-                StalenessStatus.Stale => "STALE (differs from what the instrument file gives; run coefgen emit)",
-                _ => "MISSING (run coefgen emit)",
-            };
-            output.WriteLine($"{e.RelativePath}: {word}");
-        }
-
+        var entries = StalenessReport.Print(artefacts, dir, "the instrument file", output);
         var stale = entries.Count(e => e.Status != StalenessStatus.UpToDate);
         output.WriteLine(stale == 0 ? $"all {entries.Count} files up to date" : $"{stale} of {entries.Count} files stale or missing");
         return stale == 0 ? ExitCodes.Ok : ExitCodes.Difference;

@@ -65,13 +65,7 @@ public static class InstrumentTemplateModel
         Set(g, "post_multiplier_bits", postBits);
         var maxShift = design.Tables.Max(t => t.Result.Datapath.Shift);
         Set(g, "max_shift", maxShift);
-        Set(g, "rounding", ModelText.Word(s.Rounding));
-        Set(g, "round_half_up", s.Rounding == RoundingMode.HalfUp);
-        Set(g, "round_half_even", s.Rounding == RoundingMode.HalfEven);
-        Set(g, "round_truncate", s.Rounding == RoundingMode.Truncate);
-        Set(g, "accumulator", ModelText.Word(s.Accumulator));
-        Set(g, "saturate", s.Accumulator == AccumulatorMode.Saturate);
-        Set(g, "normalize", ModelText.Word(s.Normalize));
+        Modes(g, s.Rounding, s.Accumulator, s.Normalize);
         var wideC = s.CoefBits > 32;
         Set(g, "coef_wide", wideC);
         Set(g, "coef_c_type", wideC ? "int64_t" : "int32_t");
