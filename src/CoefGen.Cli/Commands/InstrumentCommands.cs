@@ -1,6 +1,7 @@
 using CoefGen.Cli.Io;
 using CoefGen.Cli.Output;
 using CoefGen.Core.Emit;
+using CoefGen.Core.Vectors;
 
 namespace CoefGen.Cli.Commands;
 
@@ -67,5 +68,35 @@ internal static class InstrumentCommands
         var stale = entries.Count(e => e.Status != StalenessStatus.UpToDate);
         output.WriteLine(stale == 0 ? $"all {entries.Count} files up to date" : $"{stale} of {entries.Count} files stale or missing");
         return stale == 0 ? ExitCodes.Ok : ExitCodes.Difference;
+    }
+
+    /// <summary>Golden vectors of every table, each in its own folder DIR/MODE_CHANNEL (the RTL of an instrument is its combined templates).</summary>
+    public static int Vectors(string path, string outDir, VectorOptions options, TextWriter output, TextWriter error)
+    {
+        var design = InstrumentRunner.TryRun(path, error);
+        if (design is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        var files = new List<(string Path, byte[] Bytes)>();
+        foreach (var t in design.Tables)
+        {
+            if (!t.Result.Datapath.Proof.Safe)
+            {
+                DiagnosticPrinter.Print(error, [UnsafeDesign.Describe(t.Result, asError: false)]);
+            }
+
+            var set = GoldenVectorGenerator.Generate(t.Result, options);
+            files.AddRange(VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version).Select(f => (Path.Combine(outDir, $"{t.Mode}_{t.Channel}", f.Name), AtomicFile.Encode(f.Text))));
+        }
+
+        foreach (var (file, bytes) in files)
+        {
+            AtomicFile.WriteAllBytes(file, bytes);
+        }
+
+        output.WriteLine($"wrote {files.Count} files for {design.Tables.Count} tables to {Path.GetRelativePath(Directory.GetCurrentDirectory(), outDir)}, {options.Pixels} pixels each");
+        return ExitCodes.Ok;
     }
 }
