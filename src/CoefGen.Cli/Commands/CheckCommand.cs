@@ -1,4 +1,5 @@
 using System.CommandLine;
+using CoefGen.Cli.Io;
 using CoefGen.Core.Emit;
 
 namespace CoefGen.Cli.Commands;
@@ -40,6 +41,7 @@ internal static class CheckCommand
 
             var dir = parse.GetValue(outDir)?.FullName ?? ArtefactPlan.DefaultOutDir(path);
             var entries = StalenessReport.Print(artefacts, dir, "the readout file", output);
+
             return StalenessCheck.AllUpToDate(entries) ? ExitCodes.Ok : ExitCodes.Difference;
         });
         return cmd;

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using CoefGen.Cli.Diagnostics;
 using CoefGen.Cli.Io;
 using CoefGen.Cli.Output;
 using CoefGen.Core.Diagnostics;
@@ -32,7 +33,7 @@ internal static class DiffCommand
             var revision = parse.GetValue(rev);
             if ((b is null) == (revision is null))
             {
-                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG0004", SourceLocation.FileOnly(a),
+                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(DiffCodes.Arguments, SourceLocation.FileOnly(a),
                     "give either a second file (coefgen diff OLD NEW) or --rev REV (coefgen diff FILE --rev HEAD~1), not both and not neither")]);
             }
 
@@ -42,7 +43,7 @@ internal static class DiffCommand
             {
                 if (GitRevision.Read(revision, a, out var problem) is null)
                 {
-                    return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG0005", SourceLocation.FileOnly(a), $"cannot read the file at revision '{revision}': {problem}")]);
+                    return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(DiffCodes.Revision, SourceLocation.FileOnly(a), $"cannot read the file at revision '{revision}': {problem}")]);
                 }
 
                 readOld = p => GitRevision.Read(revision, p, out _);

@@ -8,9 +8,14 @@ namespace CoefGen.Cli.Commands;
 /// <summary>Renders an instrument's [[emit]] list in memory: combined packages once, other templates once per table. All or nothing.</summary>
 internal static class InstrumentArtefacts
 {
-    public static IReadOnlyList<RenderedArtefact>? Render(InstrumentDesign design, TextWriter error)
+    public static IReadOnlyList<RenderedArtefact>? Render(InstrumentDesign design, TextWriter error) => Render(design, error, out _);
+
+    /// <summary>As <see cref="Render(InstrumentDesign, TextWriter)"/>, with the instrument-file location of the [[emit]] entry behind each artefact.</summary>
+    public static IReadOnlyList<RenderedArtefact>? Render(InstrumentDesign design, TextWriter error, out IReadOnlyList<string> origins)
     {
         var spec = design.Spec;
+        var from = new List<string>();
+        origins = from;
         if (spec.Emit.Count == 0)
         {
             DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG3101", SourceLocation.FileOnly(spec.SourcePath),
@@ -27,6 +32,7 @@ internal static class InstrumentArtefacts
             if (InstrumentTemplates.TryGet(e.Template, out var t))
             {
                 Add(ArtefactRenderer.RenderAll(combined, [(Path.Combine(ResourceLocator.TemplatesDir, t.FileName), e.Path)], ResourceLocator.TemplatesDir, userBase), diagnostics, artefacts);
+                from.AddRange(Enumerable.Repeat(e.Location.ToString(), artefacts.Count - from.Count));
                 continue;
             }
 
@@ -37,6 +43,7 @@ internal static class InstrumentArtefacts
                     r.Description.ContentSha256, r.ChosenPrediction.Label, r.ChosenPrediction.SigmaElectrons, r.ChosenPrediction.SigmaAdu);
                 var model = TemplateModel.Create(r.Datapath, provenance);
                 Add(ArtefactRenderer.RenderAll(model, [(e.Template, e.PathFor(table.Mode, table.Channel))], ResourceLocator.TemplatesDir, userBase), diagnostics, artefacts);
+                from.AddRange(Enumerable.Repeat(e.Location.ToString(), artefacts.Count - from.Count));
             }
         }
 

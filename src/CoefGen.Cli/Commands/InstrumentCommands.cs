@@ -37,21 +37,20 @@ internal static class InstrumentCommands
             }
         }
 
-        var artefacts = InstrumentArtefacts.Render(design, error);
+        var artefacts = InstrumentArtefacts.Render(design, error, out var origins);
         if (artefacts is null)
         {
             return ExitCodes.BadInput;
         }
 
         var dir = outDir ?? ArtefactPlan.DefaultOutDir(path);
-        foreach (var a in artefacts)
+        using var batch = new OutputBatch();
+        for (var i = 0; i < artefacts.Count; i++)
         {
-            var target = Path.Combine(dir, a.RelativePath);
-            AtomicFile.WriteAllBytes(target, a.ToBytes());
-            output.WriteLine($"wrote {Path.GetRelativePath(Directory.GetCurrentDirectory(), target)}");
+            batch.Add(dir, "--out", artefacts[i].RelativePath, artefacts[i].ToBytes(), origins[i]);
         }
 
-        return ExitCodes.Ok;
+        return Committed(batch, output, error);
     }
 
     public static int Check(string path, string? outDir, TextWriter output, TextWriter error)
@@ -79,7 +78,8 @@ internal static class InstrumentCommands
             return ExitCodes.BadInput;
         }
 
-        var files = new List<(string Path, byte[] Bytes)>();
+        using var batch = new OutputBatch();
+        var count = 0;
         foreach (var t in design.Tables)
         {
             if (!t.Result.Datapath.Proof.Safe)
@@ -88,15 +88,34 @@ internal static class InstrumentCommands
             }
 
             var set = GoldenVectorGenerator.Generate(t.Result, options);
-            files.AddRange(VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version).Select(f => (Path.Combine(outDir, $"{t.Mode}_{t.Channel}", f.Name), AtomicFile.Encode(f.Text))));
+            foreach (var f in VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version))
+            {
+                batch.Add(outDir, "--out", Path.Combine($"{t.Mode}_{t.Channel}", f.Name), AtomicFile.Encode(f.Text), "--out");
+                count++;
+            }
         }
 
-        foreach (var (file, bytes) in files)
+        if (batch.Commit(error) is null)
         {
-            AtomicFile.WriteAllBytes(file, bytes);
+            return ExitCodes.BadInput;
         }
 
-        output.WriteLine($"wrote {files.Count} files for {design.Tables.Count} tables to {Path.GetRelativePath(Directory.GetCurrentDirectory(), outDir)}, {options.Pixels} pixels each");
+        output.WriteLine($"wrote {count} files for {design.Tables.Count} tables to {Path.GetRelativePath(Directory.GetCurrentDirectory(), outDir)}, {options.Pixels} pixels each");
+        return ExitCodes.Ok;
+    }
+
+    private static int Committed(OutputBatch batch, TextWriter output, TextWriter error)
+    {
+        if (batch.Commit(error) is not { } written)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        foreach (var (file, unchanged) in written)
+        {
+            output.WriteLine(unchanged ? $"unchanged {file}" : $"wrote {file}");
+        }
+
         return ExitCodes.Ok;
     }
 }

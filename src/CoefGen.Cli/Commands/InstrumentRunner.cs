@@ -10,14 +10,7 @@ internal static class InstrumentRunner
     /// <summary>True when <paramref name="path"/> is a readable instrument file (a top-level `base` key) rather than a readout file.</summary>
     public static bool IsInstrument(string path)
     {
-        try
-        {
-            return InstrumentLoader.IsInstrument(File.ReadAllBytes(path));
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            return false;
-        }
+        return TryRead(path) is byte[] content && InstrumentLoader.IsInstrument(content);
     }
 
     /// <summary>Designs every table; on bad input prints the diagnostics and returns null.</summary>
@@ -64,15 +57,5 @@ internal static class InstrumentRunner
     }
 
     /// <summary>The file's bytes, or null when it cannot be read.</summary>
-    public static byte[]? TryRead(string path)
-    {
-        try
-        {
-            return File.ReadAllBytes(path);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            return null;
-        }
-    }
+    public static byte[]? TryRead(string path) => InputFile.TryRead(path, "input file", InputFile.ReadoutLimit, out _, out _);
 }

@@ -45,6 +45,12 @@ public static class DesignPipeline
         var covariance = noise.Sample(grid);
         var solver = OptimalSolverSelection.For(grid.Count);
         var weights = SolveWeights(description, grid, covariance, solver.Solver);
+        RegretTable? regret = null;
+        if (description.Scenarios is not null)
+        {
+            (var robust, regret) = ScenarioStage.Run(description, grid, weights, solver.Solver);
+            weights = [.. weights, robust];
+        }
 
         var span = grid.SampleIndex[^1] - grid.SampleIndex[0] + 1L;
         Func<IReadOnlyList<double>, double>? frequencyDomain = frequencyCheck && grid.Count * span <= FrequencyCheckLimit
@@ -55,9 +61,9 @@ public static class DesignPipeline
             .ToArray();
 
         var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
-        var integer = IntegerDesignOf(description, grid, chosen, covariance, resolution.Settings);
+        var integer = IntegerStage.Run(description, () => IntegerDesignOf(description, grid, chosen, covariance, resolution.Settings));
 
-        return new DesignResult
+        var result = new DesignResult
         {
             Description = description,
             Grid = grid,
@@ -68,8 +74,16 @@ public static class DesignPipeline
             OptimalSolver = solver.Name,
             FixedPointSettings = resolution.Settings,
             Datapath = integer,
-            Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning), .. CaptureNotice(description)],
+            Regret = regret,
+            Warnings =
+            [
+                .. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning),
+                .. CaptureNotice(description),
+                .. DesignPlausibility.Check(description, covariance, chosen.H, integer),
+            ],
         };
+        DesignFiniteness.ThrowIfNotFinite(result);
+        return result;
     }
 
     /// <summary>
@@ -80,7 +94,7 @@ public static class DesignPipeline
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(settings);
-        var integer = IntegerDesignOf(result.Description, result.Grid, result.Chosen, result.Covariance, settings);
+        var integer = IntegerStage.Run(result.Description, () => IntegerDesignOf(result.Description, result.Grid, result.Chosen, result.Covariance, settings));
         return result with { FixedPointSettings = settings, Datapath = integer };
     }
 
