@@ -15,6 +15,9 @@ public static class ExampleInstrument
 
     public static string BaseText => File.ReadAllText(Path.Combine(Folder, "cam4_base.toml"));
 
+    /// <summary>Table fast/b written out by hand as a standalone readout file.</summary>
+    public static string FastB => Path.Combine(RepoPaths.Root, "tests", "CoefGen.Core.Tests", "Instrument", "cam4_fast_b.toml");
+
     public static string InstrumentText => File.ReadAllText(Path.Combine(Folder, "cam4.toml"));
 
     private static readonly Lazy<InstrumentDesign> LazyDesign = new(() => Design(InstrumentText, BaseText));

@@ -21,23 +21,15 @@ public class InstrumentDesignTests
         Assert.Equal([200, 80, 160, 40], D.Tables.Where(t => t.Channel == "a").Select(t => t.Result.Datapath.PixelSamples));
     }
 
-    /// <summary>fast/b written by hand as its own readout file (string edits of the base, not the instrument's editor), with the shared widths.</summary>
+    /// <summary>fast/b written by hand as its own readout file (Instrument/cam4_fast_b.toml), with the shared widths.</summary>
     [Fact]
     public void A_table_equals_the_hand_written_standalone_readout_bit_for_bit()
     {
         var s = D.Settings;
-        var text = ExampleInstrument.BaseText
-            .Replace("name = \"cam4\"", "name = \"cam4_fast_b\"", StringComparison.Ordinal)
-            .Replace("pixel_ns = 2000", "pixel_ns = 1000", StringComparison.Ordinal)
-            .Replace("transfer_ns = 1000", "transfer_ns = 500", StringComparison.Ordinal)
-            .Replace("start_ns = 1150", "start_ns = 600", StringComparison.Ordinal)
-            .Replace("start_ns = 150", "start_ns = 100", StringComparison.Ordinal)
-            .Replace("count_ns = 700", "count_ns = 325", StringComparison.Ordinal)
-            .Replace("conversion_gain_uv_per_e = 6.0", "conversion_gain_uv_per_e = 5.6", StringComparison.Ordinal)
-            .Replace("\ngain = 2.0", "\ngain = 2.2", StringComparison.Ordinal)
-            .Replace("white_nv_per_rthz = 6.0", "white_nv_per_rthz = 6.8", StringComparison.Ordinal)
-            .Replace("accumulator = \"wrap\"", $"accumulator = \"wrap\"\ncoef_bits = {s.CoefBits}\nsample_bits = {s.SampleBits}\nacc_bits = {s.AccBits}\noutput_bits = {s.OutputBits}\noutput_frac_bits = {D.OutputFracBits}", StringComparison.Ordinal);
-        AssertSame(ExampleInstrument.Standalone(text), D.Tables.Single(t => t.Label == "fast/b").Result);
+        var standalone = ExampleInstrument.Standalone(File.ReadAllText(ExampleInstrument.FastB));
+        var f = standalone.Description.FixedPoint;
+        Assert.Equal((s.CoefBits, s.SampleBits, s.AccBits, s.OutputBits, D.OutputFracBits), (f.CoefBits, f.SampleBits, f.AccBits, f.OutputBits, f.OutputFracBits));
+        AssertSame(standalone, D.Tables.Single(t => t.Label == "fast/b").Result);
     }
 
     [Fact]

@@ -16,16 +16,6 @@ public class InstrumentDatapathToolchainTests
 {
     private static InstrumentDesign D => ExampleInstrument.Shipped;
 
-    private static string Render(TempDir dir, string template)
-    {
-        Assert.True(InstrumentTemplates.TryGet(template, out var t));
-        var result = TemplateRenderer.RenderFile(InstrumentTemplateModel.Create(D, "coefgen", "test"), Path.Combine(RepoPaths.Templates, t.FileName));
-        Assert.True(result.Text is not null, string.Join("\n", result.Diagnostics));
-        var name = "cam4" + t.DefaultOutputSuffix;
-        dir.Write(name, result.Text!);
-        return name;
-    }
-
     /// <summary>Pixels in stream order: (table, codes); 7 per table interleaved with stride 5 (mode and channel both change), then runs of 3.</summary>
     public static List<(int Table, long[] Codes)> Stream()
     {
@@ -82,8 +72,8 @@ public class InstrumentDatapathToolchainTests
         var iverilog = Tools.Require("iverilog");
         var vvp = Tools.Require("vvp");
         using var dir = new TempDir();
-        var pkg = Render(dir, "instrument-sv-package");
-        var dp = Render(dir, "instrument-sv-datapath");
+        var pkg = InstrumentRender.Write(dir, "instrument-sv-package");
+        var dp = InstrumentRender.Write(dir, "instrument-sv-datapath");
         ToolRunner.RunOk(verilator, dir.Path, Emitted.Timeout, "--lint-only", "-Wall", "-Wno-UNUSEDPARAM", "--top-module", "cam4_tables_datapath", pkg, dp);
 
         var (stimulus, expected, count) = Files();
@@ -140,8 +130,8 @@ public class InstrumentDatapathToolchainTests
     {
         var ghdl = Tools.Require("ghdl");
         using var dir = new TempDir();
-        var pkg = Render(dir, "instrument-vhdl-package");
-        var dp = Render(dir, "instrument-vhdl-datapath");
+        var pkg = InstrumentRender.Write(dir, "instrument-vhdl-package");
+        var dp = InstrumentRender.Write(dir, "instrument-vhdl-datapath");
         var (stimulus, expected, count) = Files();
         dir.Write("stimulus.txt", stimulus);
         dir.Write("expected.txt", expected);

@@ -16,22 +16,12 @@ public class InstrumentToolchainTests
 {
     private static InstrumentDesign D => ExampleInstrument.Shipped;
 
-    private static string Render(TempDir dir, string template)
-    {
-        Assert.True(InstrumentTemplates.TryGet(template, out var t));
-        var result = TemplateRenderer.RenderFile(InstrumentTemplateModel.Create(D, "coefgen", "test"), Path.Combine(RepoPaths.Templates, t.FileName));
-        Assert.True(result.Text is not null, string.Join("\n", result.Diagnostics));
-        var name = "cam4" + t.DefaultOutputSuffix;
-        dir.Write(name, result.Text!);
-        return name;
-    }
-
     [Fact]
     public void C_tables_apply_matches_the_reference_in_every_table()
     {
         var gcc = Tools.Require("gcc");
         using var dir = new TempDir();
-        var header = Render(dir, "instrument-c-header");
+        var header = InstrumentRender.Write(dir, "instrument-c-header");
         var sb = new StringBuilder();
         foreach (var t in D.Tables)
         {
@@ -118,7 +108,7 @@ public class InstrumentToolchainTests
     {
         var ghdl = Tools.Require("ghdl");
         using var dir = new TempDir();
-        var pkg = Render(dir, "instrument-vhdl-package");
+        var pkg = InstrumentRender.Write(dir, "instrument-vhdl-package");
         dir.Write("entries.txt", Entries());
         dir.Write("tb.vhd", """
             library ieee;
@@ -172,7 +162,7 @@ public class InstrumentToolchainTests
         var iverilog = Tools.Require("iverilog");
         var vvp = Tools.Require("vvp");
         using var dir = new TempDir();
-        var pkg = Render(dir, "instrument-sv-package");
+        var pkg = InstrumentRender.Write(dir, "instrument-sv-package");
         dir.Write("lint_top.sv", """
             module lint_top (
               input logic [1:0] mode,
