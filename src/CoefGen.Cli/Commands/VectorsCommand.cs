@@ -67,16 +67,19 @@ internal static class VectorsCommand
                 files.AddRange(artefacts.Select(a => (a.RelativePath, a.ToBytes())));
             }
 
-            var set = GoldenVectorGenerator.Generate(result, new VectorOptions(n, parse.GetValue(seed)));
-            files.AddRange(VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version).Select(f => (f.Name, AtomicFile.Encode(f.Text))));
+            var source = GoldenVectorGenerator.Source(result, result.Datapath, new VectorOptions(n, parse.GetValue(seed)));
             var dir = parse.GetRequiredValue(outDir).FullName;
             foreach (var (name, bytes) in files)
             {
                 AtomicFile.WriteAllBytes(Path.Combine(dir, name), bytes);
             }
 
-            var kinds = set.Pixels.GroupBy(p => p.Kind).Count();
-            output.WriteLine($"wrote {files.Count} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {set.Pixels.Count} pixels of {kinds} kinds, seed {set.Seed}");
+            var progress = Console.IsErrorRedirected ? null : new PixelProgress(error, n);
+            var written = StreamedFiles.Write(dir, open => VectorFileWriter.Write(source, open, ToolInfo.Name, ToolInfo.Version, progress));
+            progress?.Done();
+            var kinds = source.UnreachedBranches.Count;
+            output.WriteLine($"wrote {files.Count + written} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {n} pixels, seed {source.Seed}" +
+                (kinds == 0 ? "" : $"; {kinds} mode-separating targets unreachable (manifest: unreached_branches)"));
             return ExitCodes.Ok;
         });
         return cmd;

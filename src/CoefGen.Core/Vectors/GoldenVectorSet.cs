@@ -28,5 +28,25 @@ public sealed record GoldenVectorSet
 
     public required double DiagonalLoadingV2 { get; init; }
 
+    /// <summary>Mode-separating branches (<see cref="DatapathBranch"/>, acc limits) no ADC input reaches, with the reason.</summary>
+    public required IReadOnlyList<(string Target, string Reason)> UnreachedBranches { get; init; }
+
     public required IReadOnlyList<GoldenPixel> Pixels { get; init; }
+
+    /// <summary>The same vectors as a stream (for the writer).</summary>
+    public GoldenVectorSource AsStream() => new()
+    {
+        Design = Design,
+        Seed = Seed,
+        ReadoutFileName = ReadoutFileName,
+        ReadoutSha256 = ReadoutSha256,
+        BaselineAdu = BaselineAdu,
+        FullScaleChargeAdu = FullScaleChargeAdu,
+        AduPerElectron = AduPerElectron,
+        AddedConstantV2 = AddedConstantV2,
+        DiagonalLoadingV2 = DiagonalLoadingV2,
+        UnreachedBranches = UnreachedBranches,
+        PixelCount = Pixels.Count,
+        Pixels = Pixels,
+    };
 }
