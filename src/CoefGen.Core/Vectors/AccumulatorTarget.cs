@@ -5,7 +5,7 @@ namespace CoefGen.Core.Vectors;
 /// <summary>
 /// Finds ADC codes for the weighted samples whose exact sum acc = sum c_k x_k hits a chosen value: a greedy pass
 /// over all but two coefficients (largest first) brings the remainder down, then the two reserved coefficients
-/// (the pair of small ones with the smallest gcd) solve c_i u + c_j v = remainder exactly (a linear Diophantine
+/// (pairs of small ones with the smallest gcd, opposite signs first, tried in turn) solve c_i u + c_j v = remainder exactly (a linear Diophantine
 /// equation, solved with the modular inverse). Every sample stays within the ADC's codes.
 /// </summary>
 internal sealed class AccumulatorTarget
@@ -14,9 +14,11 @@ internal sealed class AccumulatorTarget
     private readonly long _baseline;
     private readonly long _min;
     private readonly long _max;
-    private readonly int _i;
-    private readonly int _j;
-    private readonly int[] _greedyOrder;
+    /// <summary>Reserved pairs tried in turn (each with gcd = Step).</summary>
+    private const int MaxPairs = 24;
+
+    private readonly (int I, int J)[] _pairs;
+    private readonly int[] _byMagnitude;
 
     /// <param name="design">The integer design.</param>
     /// <param name="baselineSample">The signed sample every weighted sample starts from (the baseline level).</param>
@@ -27,21 +29,23 @@ internal sealed class AccumulatorTarget
         var half = 1L << (design.AdcBits - 1);
         (_min, _max) = (-half, half - 1);
         var c = design.Coefficients;
-        var small = Enumerable.Range(0, c.Count).Where(k => c[k] != 0).OrderBy(k => Math.Abs(c[k])).ThenBy(k => k).Take(24).ToArray();
-        (_i, _j, Step) = (-1, -1, 0);
+        // Prefer pairs of opposite signs: then u and v move together and both fit in the larger headroom of an
+        // off-centre baseline; then the smallest gcd (finest reachable grid), then the smallest magnitudes.
+        var nonzero = Enumerable.Range(0, c.Count).Where(k => c[k] != 0).OrderBy(k => Math.Abs(c[k])).ThenBy(k => k).ToArray();
+        var small = nonzero.Where(k => c[k] > 0).Take(12).Concat(nonzero.Where(k => c[k] < 0).Take(12)).ToArray();
+        var pairs = new List<(int I, int J, long G, bool Opposite, long Size)>();
         for (var a = 0; a < small.Length; a++)
         {
             for (var b = a + 1; b < small.Length; b++)
             {
-                var g = (long)Gcd(c[small[a]], c[small[b]]);
-                if (Step == 0 || g < Step)
-                {
-                    (_i, _j, Step) = (small[a], small[b], g);
-                }
+                var (ca, cb) = (c[small[a]], c[small[b]]);
+                pairs.Add((small[a], small[b], (long)Gcd(ca, cb), (ca > 0) != (cb > 0), Math.Abs(ca) + Math.Abs(cb)));
             }
         }
 
-        _greedyOrder = [.. Enumerable.Range(0, c.Count).Where(k => k != _i && k != _j && c[k] != 0).OrderByDescending(k => Math.Abs(c[k])).ThenBy(k => k)];
+        Step = pairs.Count == 0 ? 0 : pairs.Min(p => p.G);
+        _pairs = [.. pairs.Where(p => p.G == Step).OrderBy(p => p.Opposite ? 0 : 1).ThenBy(p => p.Size).ThenBy(p => p.I).ThenBy(p => p.J).Take(MaxPairs).Select(p => (p.I, p.J))];
+        _byMagnitude = [.. Enumerable.Range(0, c.Count).Where(k => c[k] != 0).OrderByDescending(k => Math.Abs(c[k])).ThenBy(k => k)];
         BaselineAccumulator = c.Aggregate(Int128.Zero, (s, x) => s + ((Int128)x * baselineSample));
     }
 
@@ -58,25 +62,44 @@ internal sealed class AccumulatorTarget
             return null;
         }
 
+        foreach (var (i, j) in _pairs)
+        {
+            if (Reach(target, i, j) is { } x)
+            {
+                return x;
+            }
+        }
+
+        return null;
+    }
+
+    private long[]? Reach(Int128 target, int i, int j)
+    {
         var c = _design.Coefficients;
         var x = Enumerable.Repeat(_baseline, c.Count).ToArray();
         var r = target - BaselineAccumulator;
-        foreach (var k in _greedyOrder)
+        foreach (var k in _byMagnitude)
         {
+            if (k == i || k == j)
+            {
+                continue;
+            }
+
             var want = Int128.Clamp(RoundDiv(r, c[k]), _min - _baseline, _max - _baseline);
             x[k] += (long)want;
             r -= want * c[k];
         }
 
-        var (ci, cj) = ((Int128)c[_i], (Int128)c[_j]);
-        if (r % Step != 0)
+        var (ci, cj) = ((Int128)c[i], (Int128)c[j]);
+        var g = (Int128)Gcd(c[i], c[j]);
+        if (r % g != 0)
         {
             return null;
         }
 
         // c_i u + c_j v = r: u = u0 (mod |c_j| / g); walk the solutions inside the ADC range of u.
-        var period = Int128.Abs(cj) / Step;
-        var u0 = period == 1 ? 0 : Mod(r / Step * Inverse(Mod(ci / Step, period), period), period);
+        var period = Int128.Abs(cj) / g;
+        var u0 = period == 1 ? 0 : Mod(r / g * Inverse(Mod(ci / g, period), period), period);
         Int128 lo = _min - _baseline;
         Int128 hi = _max - _baseline;
 
@@ -91,8 +114,8 @@ internal sealed class AccumulatorTarget
             var v = rest / cj;
             if (rest % cj == 0 && v >= lo && v <= hi)
             {
-                x[_i] += (long)u;
-                x[_j] += (long)v;
+                x[i] += (long)u;
+                x[j] += (long)v;
                 return x;
             }
         }
