@@ -47,7 +47,15 @@ internal sealed class AccumulatorTarget
         _pairs = [.. pairs.Where(p => p.G == Step).OrderBy(p => p.Opposite ? 0 : 1).ThenBy(p => p.Size).ThenBy(p => p.I).ThenBy(p => p.J).Take(MaxPairs).Select(p => (p.I, p.J))];
         _byMagnitude = [.. Enumerable.Range(0, c.Count).Where(k => c[k] != 0).OrderByDescending(k => Math.Abs(c[k])).ThenBy(k => k)];
         BaselineAccumulator = c.Aggregate(Int128.Zero, (s, x) => s + ((Int128)x * baselineSample));
+        Int128 up = _max - baselineSample, down = _min - baselineSample;
+        Highest = BaselineAccumulator + c.Aggregate(Int128.Zero, (s, x) => s + (x > 0 ? x * up : x * down));
+        Lowest = BaselineAccumulator + c.Aggregate(Int128.Zero, (s, x) => s + (x > 0 ? x * down : x * up));
     }
+
+    /// <summary>The largest and smallest exact sums any ADC input gives (every sample on the rail its coefficient's sign favours).</summary>
+    public Int128 Highest { get; }
+
+    public Int128 Lowest { get; }
 
     /// <summary>gcd of the reserved pair: every reachable accumulator is BaselineAccumulator + a multiple of it (0: none).</summary>
     public long Step { get; }
@@ -57,7 +65,7 @@ internal sealed class AccumulatorTarget
     /// <summary>Signed samples (time order) whose exact weighted sum is <paramref name="target"/>, or null when not found.</summary>
     public long[]? Reach(Int128 target)
     {
-        if (Step == 0 || (target - BaselineAccumulator) % Step != 0)
+        if (Step == 0 || (target - BaselineAccumulator) % Step != 0 || target > Highest || target < Lowest)
         {
             return null;
         }

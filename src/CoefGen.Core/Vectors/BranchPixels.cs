@@ -90,7 +90,7 @@ internal static class BranchPixels
         if (design.Shift > 0 && e >= 0 && e < 100 && reach.Step != 0)
         {
             var unit = Int128.One << e;
-            for (var t = 1; t < MaxTieMultiplier && found.Count < wanted.Length; t += 2)
+            for (var t = 1; t < MaxTieMultiplier && found.Count < wanted.Length && (unit * t <= reach.Highest || -unit * t >= reach.Lowest); t += 2)
             {
                 foreach (var acc in new[] { unit * t, -unit * t })
                 {
