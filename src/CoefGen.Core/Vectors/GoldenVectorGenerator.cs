@@ -32,21 +32,8 @@ public static class GoldenVectorGenerator
     /// <summary>Generates for any integer design of the same readout (e.g. the boxcar one, for comparisons), in memory.</summary>
     public static GoldenVectorSet Generate(DesignResult result, IntegerDesign design, VectorOptions options)
     {
-        var stream = Source(result, design, options);
-        return new GoldenVectorSet
-        {
-            Design = stream.Design,
-            Seed = stream.Seed,
-            ReadoutFileName = stream.ReadoutFileName,
-            ReadoutSha256 = stream.ReadoutSha256,
-            BaselineAdu = stream.BaselineAdu,
-            FullScaleChargeAdu = stream.FullScaleChargeAdu,
-            AduPerElectron = stream.AduPerElectron,
-            AddedConstantV2 = stream.AddedConstantV2,
-            DiagonalLoadingV2 = stream.DiagonalLoadingV2,
-            UnreachedBranches = stream.UnreachedBranches,
-            Pixels = [.. stream.Pixels],
-        };
+        var source = Source(result, design, options);
+        return new GoldenVectorSet(source, [.. source.Pixels]);
     }
 
     /// <summary>
@@ -76,7 +63,7 @@ public static class GoldenVectorGenerator
         var baselineSample = BitExactModel.ToSample(shape.Clean(0.0)[design.SampleIndex[0]], adc.Bits, adc.Coding);
         var (targeted, unreached) = BranchPixels.Build(design, baselineSample);
         var edges = EdgeCases(shape).Concat(targeted.Select(t => (t.Kind, 0.0, shape.WithWeighted(t.Weighted)))).ToList();
-        return new GoldenVectorSource
+        var info = new VectorInfo
         {
             Design = design,
             Seed = options.Seed,
@@ -88,9 +75,8 @@ public static class GoldenVectorGenerator
             AddedConstantV2 = sampler.AddedConstantV2,
             DiagonalLoadingV2 = sampler.DiagonalLoadingV2,
             UnreachedBranches = unreached,
-            PixelCount = options.Pixels,
-            Pixels = Pixels(design, shape, sampler, edges, fullCharge, options),
         };
+        return new GoldenVectorSource(info, options.Pixels, Pixels(design, shape, sampler, edges, fullCharge, options));
     }
 
     private static IEnumerable<GoldenPixel> Pixels(
@@ -155,4 +141,7 @@ public static class GoldenVectorGenerator
             }
         }
     }
+
+    /// <summary>The description on its own, before the pixels are attached.</summary>
+    private sealed record VectorInfo : GoldenVectorInfo;
 }

@@ -83,15 +83,5 @@ public sealed record MutantDatapath(IntegerDesign Design, Mutation Mutation, int
         };
     }
 
-    private static BigInteger Wrap(BigInteger v, int bits)
-    {
-        var mod = BigInteger.One << bits;
-        var r = BigInteger.Remainder(v, mod);
-        if (r < 0)
-        {
-            r += mod;
-        }
-
-        return r >= mod / 2 ? r - mod : r;
-    }
+    private static BigInteger Wrap(BigInteger v, int bits) => Toolchain.ReferenceArithmetic.Wrap(v, bits);
 }
