@@ -20,7 +20,7 @@ internal static class VectorsCommand
             "vectors",
             "Write golden stimulus (noise with the model's covariance, known charges, a DC offset, rails, the proof's worst cases) " +
             "and the bit-exact expected outputs as hex, decimal and CSV with a manifest, plus a reference datapath and " +
-            "testbenches (VHDL, Verilog, C). Every file is written atomically. Exit 2 on bad input.")
+            "testbenches (VHDL, Verilog, C). The files are written all-or-nothing (staged, then moved into place). Exit 2 on bad input.")
         {
             file, outDir, pixels, seed, noRtl,
         };
@@ -69,16 +69,40 @@ internal static class VectorsCommand
 
             var source = GoldenVectorGenerator.Source(result, result.Datapath, new VectorOptions(n, parse.GetValue(seed)));
             var dir = parse.GetRequiredValue(outDir).FullName;
+            using var batch = new OutputBatch();
             foreach (var (name, bytes) in files)
             {
-                AtomicFile.WriteAllBytes(Path.Combine(dir, name), bytes);
+                batch.Add(dir, "--out", name, bytes, "--out");
             }
 
-            var progress = Console.IsErrorRedirected ? null : new PixelProgress(error, n);
-            var written = StreamedFiles.Write(dir, open => VectorFileWriter.Write(source, open, ToolInfo.Name, ToolInfo.Version, progress));
-            progress?.Done();
+            // The vector files stream into the same staging folder, so the run still writes everything or nothing.
+            var written = files.Count;
+            if (batch.Stage(dir, "--out") is { } stage)
+            {
+                var progress = Console.IsErrorRedirected ? null : new PixelProgress(error, n);
+                try
+                {
+                    VectorFileWriter.Write(source, name =>
+                    {
+                        written++;
+                        return new FileStream(Path.Combine(stage.Folder, name), FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16);
+                    }, ToolInfo.Name, ToolInfo.Version, progress);
+                }
+                catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+                {
+                    batch.Fail(stage, ex);
+                }
+
+                progress?.Done();
+            }
+
+            if (batch.Commit(error) is null)
+            {
+                return ExitCodes.BadInput;
+            }
+
             var kinds = source.UnreachedBranches.Count;
-            output.WriteLine($"wrote {files.Count + written} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {n} pixels, seed {source.Seed}" +
+            output.WriteLine($"wrote {written} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {n} pixels, seed {source.Seed}" +
                 (kinds == 0 ? "" : $"; {kinds} mode-separating targets unreachable (manifest: unreached_branches)"));
             return ExitCodes.Ok;
         });

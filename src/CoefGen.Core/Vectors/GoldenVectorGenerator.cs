@@ -58,7 +58,9 @@ public static class GoldenVectorGenerator
         var baseline = adc.MinCode + (BaselineSpanFraction * span) + BaselineFractionAdu;
         var fullCharge = adc.MaxCode - baseline;
         var step = CycleStep(d);
-        var sampler = CorrelatedNoiseSampler.Create(result.Covariance, result.Noise);
+        var sampler = result.CaptureCovariance is { } measured
+            ? CorrelatedNoiseSampler.FromCaptureCovariance(measured.Matrix, measured.Count, result.Noise.DigitalVarianceV2)
+            : CorrelatedNoiseSampler.Create(result.Covariance, result.Noise);
         var shape = new CycleShape(design, adc, baseline, step);
         var baselineSample = BitExactModel.ToSample(shape.Clean(0.0)[design.SampleIndex[0]], adc.Bits, adc.Coding);
         var (targeted, unreached) = BranchPixels.Build(design, baselineSample);
