@@ -10,20 +10,9 @@ public class VerifyIntegrityAndAccumulatorTests
 {
     private const string Example = "slowscan_spectro.toml";
 
-    private static string Generate(string example = Example, int pixels = 60)
-    {
-        var dir = RepoPaths.TempDir();
-        var r = CliRunner.Run("vectors", RepoPaths.Example(example), "--out", dir, "--pixels", pixels.ToString(CultureInfo.InvariantCulture), "--no-rtl");
-        Assert.True(r.ExitCode == 0, r.Error);
-        return dir;
-    }
+    private static string Generate(string example = Example, int pixels = 60) => VectorsCli.Generate(example, pixels, "--no-rtl");
 
-    private static string Dump(string dir, IEnumerable<string> lines)
-    {
-        var path = Path.Combine(dir, "dut.txt");
-        File.WriteAllText(path, string.Join("\n", lines) + "\n");
-        return path;
-    }
+    private static string Dump(string dir, IEnumerable<string> lines) => VectorsCli.Dump(dir, lines);
 
     private static CliRunner.Result Verify(string dir, string dump, params string[] extra) =>
         CliRunner.Run(["verify", RepoPaths.Example(Example), "--vectors", dir, "--dut", dump, .. extra]);
