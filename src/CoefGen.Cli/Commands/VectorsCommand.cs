@@ -72,9 +72,7 @@ internal static class VectorsCommand
                 files.AddRange(artefacts.Select(a => (a.RelativePath, a.ToBytes())));
             }
 
-            var set = GoldenVectorGenerator.Generate(result, new VectorOptions(n, parse.GetValue(seed)));
-            var alongside = files.Select(f => (f.Name, System.Text.Encoding.UTF8.GetString(f.Bytes))).ToList();
-            files.AddRange(VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version, alongside).Select(f => (f.Name, AtomicFile.Encode(f.Text))));
+            var source = GoldenVectorGenerator.Source(result, result.Datapath, new VectorOptions(n, parse.GetValue(seed)));
             var dir = parse.GetRequiredValue(outDir).FullName;
             using var batch = new OutputBatch();
             foreach (var (name, bytes) in files)
@@ -82,13 +80,35 @@ internal static class VectorsCommand
                 batch.Add(dir, "--out", name, bytes, "--out");
             }
 
+            // The vector files stream into the same staging folder, so the run still writes everything or nothing.
+            var written = files.Count;
+            if (batch.Stage(dir, "--out") is { } stage)
+            {
+                var progress = Console.IsErrorRedirected ? null : new PixelProgress(error, n);
+                try
+                {
+                    VectorFileWriter.Write(source, name =>
+                    {
+                        written++;
+                        return new FileStream(Path.Combine(stage.Folder, name), FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16);
+                    }, ToolInfo.Name, ToolInfo.Version, progress, alongside: files);
+                }
+                catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+                {
+                    batch.Fail(stage, ex);
+                }
+
+                progress?.Done();
+            }
+
             if (batch.Commit(error) is null)
             {
                 return ExitCodes.BadInput;
             }
 
-            var kinds = set.Pixels.GroupBy(p => p.Kind).Count();
-            output.WriteLine($"wrote {files.Count} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {set.Pixels.Count} pixels of {kinds} kinds, seed {set.Seed}");
+            var kinds = source.UnreachedBranches.Count;
+            output.WriteLine($"wrote {written} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {n} pixels, seed {source.Seed}" +
+                (kinds == 0 ? "" : $"; {kinds} mode-separating targets unreachable (manifest: unreached_branches)"));
             return ExitCodes.Ok;
         });
         return cmd;

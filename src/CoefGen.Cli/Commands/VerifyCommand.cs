@@ -23,12 +23,16 @@ internal static class VerifyCommand
             DefaultValueFactory = _ => "auto",
         };
         format.AcceptOnlyFromAmong("auto", "hex", "decimal");
+        var acc = new Option<bool>("--acc")
+        {
+            Description = "Require the dump's second column (the final accumulator) and compare it too; without --acc it is compared whenever every line has one.",
+        };
         var cmd = new Command(
             "verify",
             "Compare a DUT's output dump with the golden expected outputs, pixel by pixel. " +
             "Exit 0 when every pixel matches, 1 on a mismatch, 2 on bad input (wrong count, unparsable line, vectors of another readout file).")
         {
-            file, vectors, dut, format,
+            file, vectors, dut, format, acc,
         };
         cmd.SetAction(parse =>
         {
@@ -59,14 +63,19 @@ internal static class VerifyCommand
                     $"these vectors were generated from a readout file with SHA-256 {manifest.ReadoutSha256}, not from {readoutPath} ({load.Description.ContentSha256}); regenerate them with `coefgen vectors`")]);
             }
 
+            if (VectorHashes.Check(dir, manifest, error) is { } hashFailure)
+            {
+                return hashFailure;
+            }
+
             var expectedPath = Path.Combine(dir, VectorFileNames.ExpectedDecimal);
             if (Read(expectedPath, error) is not { } expectedText)
             {
                 return ExitCodes.BadInput;
             }
 
-            var (expected, expectedProblems) = ExpectedOutputs.Parse(expectedText, expectedPath, manifest.Pixels);
-            if (expected is null)
+            var (expected, expectedAcc, expectedProblems) = ExpectedOutputs.ParseWithAccumulators(expectedText, expectedPath, manifest.Pixels);
+            if (expected is null || expectedAcc is null)
             {
                 return DiagnosticPrinter.PrintFailure(error, expectedProblems);
             }
@@ -77,10 +86,18 @@ internal static class VerifyCommand
             }
 
             var wanted = parse.GetValue(format) switch { "hex" => DumpFormat.Hex, "decimal" => DumpFormat.DecimalText, _ => DumpFormat.Auto };
-            var dump = DumpReader.Parse(dumpText, dumpPath, manifest.OutputBits, wanted);
+            var dump = DumpReader.Parse(dumpText, dumpPath, manifest.OutputBits, manifest.AccBits, wanted);
             if (dump.Values is null)
             {
                 return DiagnosticPrinter.PrintFailure(error, dump.Diagnostics);
+            }
+
+            if (parse.GetValue(acc) && dump.Accumulators is null)
+            {
+                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(VectorCodes.DumpNoAccumulator, SourceLocation.FileOnly(dumpPath),
+                    manifest.AccBits == 0
+                        ? "--acc needs the accumulator width, which this manifest does not list; regenerate the vectors"
+                        : $"--acc: every line must hold the output and then the final {manifest.AccBits}-bit accumulator, in the dump's format")]);
             }
 
             if (dump.Values.Count != expected.Count)
@@ -89,23 +106,45 @@ internal static class VerifyCommand
                     $"{dump.Values.Count} values, but the vectors hold {expected.Count} pixels (one value per pixel, in pixel order)")]);
             }
 
-            return Report(OutputComparison.Compare(expected, dump.Values), dump.Format, manifest, output);
+            var accComparison = dump.Accumulators is null ? null : OutputComparison.Compare(expectedAcc, dump.Accumulators);
+            return Report(OutputComparison.Compare(expected, dump.Values), accComparison, dump.Format, manifest, output);
         });
         return cmd;
     }
 
-    private static int Report(OutputComparison c, DumpFormat format, VectorManifest manifest, TextWriter output)
+    private static int Report(OutputComparison c, OutputComparison? accumulators, DumpFormat format, VectorManifest manifest, TextWriter output)
     {
-        var word = format == DumpFormat.Hex ? "hex" : "decimal";
+        var word = DumpReader.Word(format);
+        var what = accumulators is null ? "outputs only: the dump has no accumulator column" : $"outputs and {manifest.AccBits}-bit accumulators";
         output.WriteLine(string.Create(CultureInfo.InvariantCulture,
-            $"compared {c.Compared} pixels ({word} dump, {manifest.OutputBits}-bit output, 1 LSB = 2^-{manifest.OutputFracBits} ADU)"));
-        if (c.Matches)
+            $"compared {c.Compared} pixels ({word} dump, {what}; {manifest.OutputBits}-bit output, 1 LSB = 2^-{manifest.OutputFracBits} ADU)"));
+        if (c.Matches && (accumulators?.Matches ?? true))
         {
-            output.WriteLine("match: every output equals the bit-exact model");
+            output.WriteLine(accumulators is null ? "match: every output equals the bit-exact model" : "match: every output and accumulator equals the bit-exact model");
+            BranchCoverage.Print(manifest, output);
             return ExitCodes.Ok;
         }
 
-        output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"MISMATCH in {c.Mismatches.Count} of {c.Compared} pixels"));
+        if (c.Matches)
+        {
+            output.WriteLine("every output matches");
+        }
+        else
+        {
+            PrintMismatches("output", c, output);
+        }
+
+        if (accumulators is { Matches: false })
+        {
+            PrintMismatches("accumulator", accumulators, output);
+        }
+
+        return ExitCodes.Difference;
+    }
+
+    private static void PrintMismatches(string what, OutputComparison c, TextWriter output)
+    {
+        output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"MISMATCH in {c.Mismatches.Count} of {c.Compared} pixels ({what})"));
         output.WriteLine("  pixels are numbered from 0 in file order: pixel k is line k + 1 of the dump and of the expected-output files");
         output.WriteLine("  pixel      expected           got  difference (LSB)");
         foreach (var m in c.Mismatches.Take(ListedMismatches))
@@ -118,8 +157,6 @@ internal static class VerifyCommand
         {
             output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  ... and {c.Mismatches.Count - ListedMismatches} more"));
         }
-
-        return ExitCodes.Difference;
     }
 
     private static string? Read(string path, TextWriter error)

@@ -116,6 +116,11 @@ public sealed class TemplateModel
         var cApply = d.ProductBits <= 62 && scaledBits + 1 <= 62 && d.AccBits <= 62 && d.Shift <= 61 && d.AdcBits <= 31
             && d.OutputBits <= 63;
         Set(g, "c_apply_supported", cApply);
+
+        // Otherwise the 128-bit path (compiler __int128 or two words): 64-bit products, accumulator and output, acc * M below 2^127.
+        var cWide = !cApply && d.AdcBits <= 31 && d.CoefBits <= 32 && d.AccBits <= 64 && d.OutputBits <= 64
+            && d.AccBits + Math.Max(d.PostMultiplierBits, 1) <= 127 && d.Shift <= 126;
+        Set(g, "c_apply_wide", cWide);
         g.IsReadOnly = true;
         return new TemplateModel(g, prefix, d.Coefficients.Count);
     }

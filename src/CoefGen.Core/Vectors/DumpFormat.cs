@@ -3,7 +3,7 @@ namespace CoefGen.Core.Vectors;
 /// <summary>How the values of a DUT dump are written.</summary>
 public enum DumpFormat
 {
-    /// <summary>Decide from the text (see <see cref="DumpReader.Detect"/>).</summary>
+    /// <summary>Decide once from the whole text (see <see cref="DumpReader.Detect"/>).</summary>
     Auto,
 
     /// <summary>Signed decimal, one value per line.</summary>

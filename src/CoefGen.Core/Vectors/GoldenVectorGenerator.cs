@@ -11,7 +11,8 @@ namespace CoefGen.Core.Vectors;
 /// (nearest code, ties up), clipped to the rails and written in the readout's coding. n_k is drawn at the
 /// weighted samples with the model's analog covariance (<see cref="CorrelatedNoiseSampler"/>) plus the ADC's
 /// own white noise, both before quantisation, so quantisation itself supplies the LSB^2/12 term. Samples
-/// outside the windows carry the noise-free level. The edge cases come first, then a repeating ladder of ten
+/// outside the windows carry the noise-free level. The edge cases come first (with the pixels of
+/// <see cref="BranchPixels"/> that separate the arithmetic modes), then a repeating ladder of ten
 /// pixels: eight of zero charge (noise), one mid-scale and one full-scale charge.
 /// </summary>
 public static class GoldenVectorGenerator
@@ -28,8 +29,18 @@ public static class GoldenVectorGenerator
         return Generate(result, result.Datapath, options);
     }
 
-    /// <summary>Generates for any integer design of the same readout (e.g. the boxcar one, for comparisons).</summary>
+    /// <summary>Generates for any integer design of the same readout (e.g. the boxcar one, for comparisons), in memory.</summary>
     public static GoldenVectorSet Generate(DesignResult result, IntegerDesign design, VectorOptions options)
+    {
+        var source = Source(result, design, options);
+        return new GoldenVectorSet(source, [.. source.Pixels]);
+    }
+
+    /// <summary>
+    /// The same vectors as a stream: the pixels are drawn one at a time as they are enumerated (enumerate once),
+    /// so memory does not grow with the pixel count.
+    /// </summary>
+    public static GoldenVectorSource Source(DesignResult result, IntegerDesign design, VectorOptions options)
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(design);
@@ -50,27 +61,11 @@ public static class GoldenVectorGenerator
         var sampler = result.CaptureCovariance is { } measured
             ? CorrelatedNoiseSampler.FromCaptureCovariance(measured.Matrix, measured.Count, result.Noise.DigitalVarianceV2)
             : CorrelatedNoiseSampler.Create(result.Covariance, result.Noise);
-        var rng = new Xoshiro256StarStar(options.Seed);
         var shape = new CycleShape(design, adc, baseline, step);
-
-        var stimuli = EdgeCases(shape).ToList();
-        var noise = new double[sampler.Count];
-        for (var j = 0; stimuli.Count < options.Pixels; j++)
-        {
-            var (kind, charge) = (j % 10) switch
-            {
-                4 => (PixelKind.ChargeMid, fullCharge / 2),
-                9 => (PixelKind.ChargeFull, fullCharge),
-                _ => (PixelKind.Noise, 0.0),
-            };
-            sampler.Sample(rng, noise);
-            stimuli.Add((kind, charge, shape.Noisy(charge, noise, rng)));
-        }
-
-        var pixels = stimuli.Take(options.Pixels)
-            .Select(s => new GoldenPixel(s.Kind, s.Charge, s.Codes, BitExactModel.RunCycle(design, s.Codes)))
-            .ToArray();
-        return new GoldenVectorSet
+        var baselineSample = BitExactModel.ToSample(shape.Clean(0.0)[design.SampleIndex[0]], adc.Bits, adc.Coding);
+        var (targeted, unreached) = BranchPixels.Build(design, baselineSample);
+        var edges = EdgeCases(shape).Concat(targeted.Select(t => (t.Kind, 0.0, shape.WithWeighted(t.Weighted)))).ToList();
+        var info = new VectorInfo
         {
             Design = design,
             Seed = options.Seed,
@@ -81,8 +76,33 @@ public static class GoldenVectorGenerator
             AduPerElectron = d.Sensor.VoltsAtAdcPerElectron / adc.LsbV,
             AddedConstantV2 = sampler.AddedConstantV2,
             DiagonalLoadingV2 = sampler.DiagonalLoadingV2,
-            Pixels = pixels,
+            UnreachedBranches = unreached,
         };
+        return new GoldenVectorSource(info, options.Pixels, Pixels(design, shape, sampler, edges, fullCharge, options));
+    }
+
+    private static IEnumerable<GoldenPixel> Pixels(
+        IntegerDesign design, CycleShape shape, CorrelatedNoiseSampler sampler, List<(string Kind, double Charge, long[] Codes)> edges, double fullCharge, VectorOptions options)
+    {
+        GoldenPixel Pixel(string kind, double charge, long[] codes) => new(kind, charge, codes, BitExactModel.RunCycle(design, codes));
+        foreach (var (kind, charge, codes) in edges.Take(options.Pixels))
+        {
+            yield return Pixel(kind, charge, codes);
+        }
+
+        var rng = new Xoshiro256StarStar(options.Seed);
+        var noise = new double[sampler.Count];
+        for (var j = 0; j < options.Pixels - edges.Count; j++)
+        {
+            var (kind, charge) = (j % 10) switch
+            {
+                4 => (PixelKind.ChargeMid, fullCharge / 2),
+                9 => (PixelKind.ChargeFull, fullCharge),
+                _ => (PixelKind.Noise, 0.0),
+            };
+            sampler.Sample(rng, noise);
+            yield return Pixel(kind, charge, shape.Noisy(charge, noise, rng));
+        }
     }
 
     /// <summary>The step response s_k at every sample of the cycle, by the same formula as the weights' grid.</summary>
@@ -123,4 +143,7 @@ public static class GoldenVectorGenerator
             }
         }
     }
+
+    /// <summary>The description on its own, before the pixels are attached.</summary>
+    private sealed record VectorInfo : GoldenVectorInfo;
 }

@@ -2,12 +2,13 @@ namespace CoefGen.Core.Vectors;
 
 /// <summary>
 /// The reference datapath and testbench templates in templates/, rendered next to the vectors. The VHDL
-/// datapath uses the emitted vhdl-package, the Verilog one the verilog-include, the C bench the c-header.
+/// datapath uses the emitted vhdl-package, the Verilog one the verilog-include, the C bench the c-header; the SV
+/// package is written beside them for SystemVerilog users.
 /// </summary>
 public static class ReferenceTemplates
 {
     /// <summary>Built-in coefficient templates the reference files include.</summary>
-    public static IReadOnlyList<string> Packages { get; } = ["vhdl-package", "verilog-include", "c-header"];
+    public static IReadOnlyList<string> Packages { get; } = ["vhdl-package", "verilog-include", "c-header", "sv-package"];
 
     /// <summary>(template file in templates/, output suffix after the prefix).</summary>
     public static IReadOnlyList<(string FileName, string OutputSuffix)> Files { get; } =

@@ -18,6 +18,12 @@ public static class VectorCodes
     /// <summary>The expected-values file and the manifest disagree on the pixel count.</summary>
     public const string ExpectedCount = "CG4005";
 
+    /// <summary>A vector file's SHA-256 differs from the manifest's (edited or damaged after generation).</summary>
+    public const string FileTampered = "CG4006";
+
+    /// <summary>`verify --acc` was asked, but the dump has no accumulator column.</summary>
+    public const string DumpNoAccumulator = "CG4015";
+
     /// <summary>A dump line is neither a decimal nor a hex number.</summary>
     public const string DumpUnparsable = "CG4012";
 

@@ -4,23 +4,12 @@ public class VectorsAndVerifyCommandTests
 {
     private const string Example = "slowscan_spectro.toml";
 
-    private static string Generate(int pixels = 60, string seed = "5")
-    {
-        var dir = RepoPaths.TempDir();
-        var r = CliRunner.Run("vectors", RepoPaths.Example(Example), "--out", dir, "--pixels", pixels.ToString(System.Globalization.CultureInfo.InvariantCulture), "--seed", seed);
-        Assert.True(r.ExitCode == 0, r.Error);
-        return dir;
-    }
+    private static string Generate(int pixels = 60, string seed = "5") => VectorsCli.Generate(Example, pixels, "--seed", seed);
 
     private static string[] ExpectedOutputs(string dir) =>
         File.ReadAllLines(Path.Combine(dir, "expected.txt")).Select(l => l.Split(' ')[0]).ToArray();
 
-    private static string Dump(string dir, IEnumerable<string> lines)
-    {
-        var path = Path.Combine(dir, "dut.txt");
-        File.WriteAllText(path, string.Join("\n", lines) + "\n");
-        return path;
-    }
+    private static string Dump(string dir, IEnumerable<string> lines) => VectorsCli.Dump(dir, lines);
 
     private static CliRunner.Result Verify(string dir, string dump, params string[] extra) =>
         CliRunner.Run(["verify", RepoPaths.Example(Example), "--vectors", dir, "--dut", dump, .. extra]);

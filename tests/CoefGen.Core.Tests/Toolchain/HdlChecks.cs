@@ -36,7 +36,16 @@ public static class HdlChecks
             [$"assign o_COEF = 64'({pkg}::COEF[idx]);", $"assign o_SAMPLE_INDEX = 64'({pkg}::SAMPLE_INDEX[idx]);", $"assign o_coef_at = {pkg}::coef_at(int'(idx));",
              $"assign o_sample_index_at = {pkg}::sample_index_at(int'(idx));"]);
         dir.Write("lint_top.sv", wrapper);
-        ToolRunner.RunOk(verilator, dir.Path, Emitted.Timeout, "--lint-only", "-Wall", "--top-module", "lint_top", pkgFile, "lint_top.sv");
+        ToolRunner.RunOk(verilator, dir.Path, Emitted.Timeout, "--lint-only", "-Wall", "+define+COEFGEN_SV_ARRAYS", "--top-module", "lint_top", pkgFile, "lint_top.sv");
+
+        // The default (case-based) form lints too, with only the functions used (Verilator's case-function lint is slow above a few thousand).
+        if (n <= 4096)
+        {
+            dir.Write("lint_fn.sv", HdlBenches.LintWrapper("lint_fn", "", "", pkg + "::",
+            [$"  input logic [{ib - 1}:0] idx", $"  output {pkg}::coef_t o_coef_at", "  output logic [31:0] o_sample_index_at"],
+                [$"assign o_coef_at = {pkg}::coef_at(int'(idx));", $"assign o_sample_index_at = {pkg}::sample_index_at(int'(idx));"]));
+            ToolRunner.RunOk(verilator, dir.Path, Emitted.Timeout, "--lint-only", "-Wall", "--top-module", "lint_fn", pkgFile, "lint_fn.sv");
+        }
 
         dir.Write("tb.sv", HdlBenches.SvBench(pkg, d.CoefBits, n));
         dir.Write("coefs.hex", Vectors.CoefHex(vectorsFrom ?? d));

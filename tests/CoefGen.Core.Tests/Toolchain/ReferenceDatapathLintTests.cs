@@ -28,6 +28,20 @@ public class ReferenceDatapathLintTests
         AssertLintClean(r);
     }
 
+    /// <summary>reset.start = 0: the window test must not compare an unsigned counter with 0 (Verilator UNSIGNED).</summary>
+    [Fact]
+    public void Verilog_datapath_with_the_reset_window_at_sample_0_lints_clean_and_simulates()
+    {
+        var toml = File.ReadAllText(ExampleDesigns.ExamplePath("slowscan_spectro.toml"))
+            .Replace("[timing.reset]\nstart_ns = 700", "[timing.reset]\nstart_ns = 0", StringComparison.Ordinal);
+        var r = ExampleDesigns.FromText(toml, "slow_reset0.toml");
+        Assert.Equal(0, r.Datapath.Reset.Start);
+        AssertLintClean(r);
+        using var dir = new TempDir();
+        var prefix = ReferenceBench.Write(dir, r, 40);
+        ReferenceBench.AssertPass(ReferenceBench.Icarus(dir, prefix), 40);
+    }
+
     /// <summary>Negative control: the same check sees a width mismatch once one is put into the rendered datapath.</summary>
     [Fact]
     public void The_lint_check_catches_an_implicit_widening()

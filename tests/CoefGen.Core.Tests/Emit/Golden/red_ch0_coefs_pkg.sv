@@ -3,10 +3,13 @@
 // Scheme: optimal; predicted read noise 3.25 e- rms, 1.063 ADU rms.
 // Width proof: safe for ADC inputs inside the stated range.
 // Generated file: regenerate from the readout file instead of editing. Verify in simulation and on the
-// bench before use. coef_at/sample_index_at work in every simulator: array-based where unpacked
-// localparam arrays are accepted, case-based under Icarus, which rejects them.
+// bench before use. coef_at/sample_index_at are case-based by default, which every simulator and synthesis
+// front end parses; define COEFGEN_SV_ARRAYS for the unpacked COEF/SAMPLE_INDEX arrays instead (faster for
+// large tables where the tool accepts unpacked localparam arrays).
 
 package red_ch0_coefs_pkg;
+  // Parameters for the user's design; a design that uses only some of them should not warn about the rest.
+  /* verilator lint_off UNUSEDPARAM */
   localparam int PIXEL_SAMPLES = 16;
   localparam int RESET_START = 2;
   localparam int RESET_COUNT = 4;
@@ -31,10 +34,11 @@ package red_ch0_coefs_pkg;
   localparam logic signed [63:0] ADC_OFFSET = 64'sd0;
   localparam logic signed [63:0] POST_MULTIPLIER = 64'sd1;
   localparam logic signed [63:0] ROUNDING_CONSTANT = 64'sd128;
+  /* verilator lint_on UNUSEDPARAM */
 
   typedef logic signed [COEF_BITS-1:0] coef_t;
 
-`ifndef __ICARUS__
+`ifdef COEFGEN_SV_ARRAYS
   // Integer coefficient per weighted sample, time order (reset window first); real weight = COEF / 2**P.
   localparam coef_t COEF [COEF_COUNT] = '{
     -18'sd150,
@@ -67,7 +71,7 @@ package red_ch0_coefs_pkg;
     return (index >= 0 && index < COEF_COUNT) ? SAMPLE_INDEX[index] : -1;
   endfunction
 `else
-  // Icarus: case-based functions (a linear search per call; fine for a few thousand coefficients).
+  // Case-based functions (a linear search per call in Icarus; fine for a few thousand coefficients).
   function automatic coef_t coef_at(input int index);
     case (index)
       0: coef_at = -18'sd150;

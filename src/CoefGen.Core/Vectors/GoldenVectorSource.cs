@@ -1,0 +1,23 @@
+using System.Diagnostics.CodeAnalysis;
+
+namespace CoefGen.Core.Vectors;
+
+/// <summary>
+/// Golden vectors whose pixels are produced while they are enumerated (once): what the file writer streams to
+/// disk so that memory does not depend on the pixel count.
+/// </summary>
+public sealed record GoldenVectorSource : GoldenVectorInfo
+{
+    [SetsRequiredMembers]
+    public GoldenVectorSource(GoldenVectorInfo info, int pixelCount, IEnumerable<GoldenPixel> pixels)
+        : base(info)
+    {
+        PixelCount = pixelCount;
+        Pixels = pixels;
+    }
+
+    /// <summary>How many pixels <see cref="Pixels"/> yields.</summary>
+    public required int PixelCount { get; init; }
+
+    public required IEnumerable<GoldenPixel> Pixels { get; init; }
+}
