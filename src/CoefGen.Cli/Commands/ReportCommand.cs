@@ -2,6 +2,8 @@ using System.CommandLine;
 using System.Security.Cryptography;
 using CoefGen.Cli.Io;
 using CoefGen.Cli.Output;
+using CoefGen.Core.Instrument;
+using CoefGen.Core.Pipeline;
 using CoefGen.Core.Study;
 
 namespace CoefGen.Cli.Commands;
@@ -11,7 +13,7 @@ internal static class ReportCommand
 {
     public static Command Create(TextWriter output, TextWriter error)
     {
-        var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML)." };
+        var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML), or an instrument file: then a summary page in DIR and each table's report in DIR/MODE_CHANNEL/." };
         var outDir = new Option<DirectoryInfo>("--out", "-o") { Description = "Folder for report.html, report.md and the Markdown's charts.", Required = true };
         var requireSafe = UnsafeDesign.RequireSafeOption();
         var cmd = new Command(
@@ -27,51 +29,95 @@ internal static class ReportCommand
         cmd.SetAction(parse =>
         {
             var path = parse.GetRequiredValue(file).ToString();
+            var dir = parse.GetRequiredValue(outDir).FullName;
+            if (InstrumentRunner.IsInstrument(path))
+            {
+                return Instrument(path, dir, parse.GetValue(requireSafe), output, error);
+            }
+
             var result = DesignRunner.TryRun(path, error);
             if (result is null)
             {
                 return ExitCodes.BadInput;
             }
 
-            var emitted = new List<EmittedFile>();
-            var entries = result.Description.Emit.Select(e => (e.Template, e.Path)).ToList();
-            if (entries.Count > 0)
-            {
-                var artefacts = ArtefactPlan.Render(result, entries, error);
-                if (artefacts is null)
-                {
-                    return ExitCodes.BadInput;
-                }
-
-                for (var i = 0; i < artefacts.Count; i++)
-                {
-                    var bytes = artefacts[i].ToBytes();
-                    emitted.Add(new EmittedFile(entries[i].Template, artefacts[i].RelativePath, bytes.Length, Convert.ToHexStringLower(SHA256.HashData(bytes))));
-                }
-            }
-
-            var sections = DesignReport.Build(result, new ReportContext(ToolInfo.Version, emitted));
-            var title = $"Design report: {result.Description.Name}";
-            var charts = new List<(string Name, string Svg)>();
-            var markdown = ReportMarkdown.Render(title, sections, charts);
-            var html = ReportHtml.Render(title, sections);
-            var dir = parse.GetRequiredValue(outDir).FullName;
             using var batch = new OutputBatch();
-            foreach (var (name, svg) in charts)
-            {
-                batch.Add(dir, "--out", name, AtomicFile.Encode(svg), "--out");
-            }
-
-            batch.Add(dir, "--out", "report.md", AtomicFile.Encode(markdown), "--out");
-            batch.Add(dir, "--out", "report.html", AtomicFile.Encode(html), "--out");
-            if (batch.Commit(error) is null)
+            if (AddPages(result, batch, dir, "", error) is not int charts || batch.Commit(error) is null)
             {
                 return ExitCodes.BadInput;
             }
 
-            output.WriteLine($"wrote {Path.Combine(dir, "report.html")} and report.md with {charts.Count} charts");
+            output.WriteLine($"wrote {Path.Combine(dir, "report.html")} and report.md with {charts} charts");
             return UnsafeDesign.RequireSafe(result, parse.GetValue(requireSafe), error) ?? ExitCodes.Ok;
         });
         return cmd;
+    }
+
+    /// <summary>An instrument: DIR/report.html and report.md (every table, the shared datapath) and each table's report in DIR/MODE_CHANNEL/.</summary>
+    private static int Instrument(string path, string dir, bool requireSafe, TextWriter output, TextWriter error)
+    {
+        var design = InstrumentRunner.TryRun(path, error);
+        if (design is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        using var batch = new OutputBatch();
+        foreach (var t in design.Tables)
+        {
+            if (AddPages(t.Result, batch, dir, InstrumentReport.TableFolder(t), error) is null)
+            {
+                error.WriteLine($"  (table {t.Label})");
+                return ExitCodes.BadInput;
+            }
+        }
+
+        var title = $"Instrument report: {design.Spec.Name}";
+        var markdown = ReportMarkdown.Render(title, InstrumentReport.Build(design, ToolInfo.Version, "report.md"), []);
+        var html = ReportHtml.Render(title, InstrumentReport.Build(design, ToolInfo.Version, "report.html"));
+        batch.Add(dir, "--out", "report.md", AtomicFile.Encode(markdown), "--out");
+        batch.Add(dir, "--out", "report.html", AtomicFile.Encode(html), "--out");
+        if (batch.Commit(error) is null)
+        {
+            return ExitCodes.BadInput;
+        }
+
+        output.WriteLine($"wrote {Path.Combine(dir, "report.html")} and report.md (every table, the shared datapath) and {design.Tables.Count} table reports in {Path.Combine(dir, "MODE_CHANNEL")}");
+        return design.Tables.Select(t => UnsafeDesign.RequireSafe(t.Result, requireSafe, error)).FirstOrDefault(c => c is not null) ?? ExitCodes.Ok;
+    }
+
+    /// <summary>Adds one design's report.html, report.md and charts under DIR/<paramref name="folder"/>; the chart count, or null on bad input.</summary>
+    private static int? AddPages(DesignResult result, OutputBatch batch, string dir, string folder, TextWriter error)
+    {
+        var emitted = new List<EmittedFile>();
+        var entries = result.Description.Emit.Select(e => (e.Template, e.Path)).ToList();
+        if (entries.Count > 0)
+        {
+            var artefacts = ArtefactPlan.Render(result, entries, error);
+            if (artefacts is null)
+            {
+                return null;
+            }
+
+            for (var i = 0; i < artefacts.Count; i++)
+            {
+                var bytes = artefacts[i].ToBytes();
+                emitted.Add(new EmittedFile(entries[i].Template, artefacts[i].RelativePath, bytes.Length, Convert.ToHexStringLower(SHA256.HashData(bytes))));
+            }
+        }
+
+        var sections = DesignReport.Build(result, new ReportContext(ToolInfo.Version, emitted));
+        var title = $"Design report: {result.Description.Name}";
+        var charts = new List<(string Name, string Svg)>();
+        var markdown = ReportMarkdown.Render(title, sections, charts);
+        var html = ReportHtml.Render(title, sections);
+        foreach (var (name, svg) in charts)
+        {
+            batch.Add(dir, "--out", Path.Combine(folder, name), AtomicFile.Encode(svg), "--out");
+        }
+
+        batch.Add(dir, "--out", Path.Combine(folder, "report.md"), AtomicFile.Encode(markdown), "--out");
+        batch.Add(dir, "--out", Path.Combine(folder, "report.html"), AtomicFile.Encode(html), "--out");
+        return charts.Count;
     }
 }

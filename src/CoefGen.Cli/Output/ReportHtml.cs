@@ -91,6 +91,10 @@ internal static class ReportHtml
                     var value = c.Value is double v ? $" data-value=\"{v.ToString("R", CultureInfo.InvariantCulture)}\"" : "";
                     sb.Append($"<td{raw} data-json=\"{E(c.JsonPath)}\"{value}>{(c.Raw ? E(c.Text) : Q(c.Text))}</td>");
                 }
+                else if (c.Href is not null)
+                {
+                    sb.Append($"<td><a href=\"{E(c.Href)}\">{E(c.Text)}</a></td>");
+                }
                 else
                 {
                     sb.Append($"<td{raw}>{(c.Raw ? E(c.Text) : Q(c.Text))}</td>");

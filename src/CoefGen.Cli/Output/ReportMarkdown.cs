@@ -41,7 +41,7 @@ internal static class ReportMarkdown
                     sb.Append('\n');
                     for (var i = 0; i < b.Table.Count; i++)
                     {
-                        sb.Append("| ").Append(string.Join(" | ", b.Table[i].Select(c => c.Text.Replace("|", "\\|", StringComparison.Ordinal)))).Append(" |\n");
+                        sb.Append("| ").Append(string.Join(" | ", b.Table[i].Select(Cell))).Append(" |\n");
                         if (i == 0)
                         {
                             sb.Append('|').Append(string.Concat(b.Table[i].Select(_ => " --- |"))).Append('\n');
@@ -59,5 +59,11 @@ internal static class ReportMarkdown
         }
 
         return sb.ToString();
+    }
+
+    private static string Cell(ReportCell c)
+    {
+        var text = c.Text.Replace("|", "\\|", StringComparison.Ordinal);
+        return c.Href is null ? text : $"[{text}]({c.Href})";
     }
 }

@@ -5,9 +5,10 @@ namespace CoefGen.Core.Study;
 /// <summary>
 /// One table cell of the design report: text, or a number with the JSON path (in the `design --json` document) it
 /// was taken from, so a test can check every number against that document. Numbers are shown by <see cref="Human"/>;
-/// <see cref="Value"/> keeps full precision. <see cref="Raw"/> marks machine text (hashes, big integers).
+/// <see cref="Value"/> keeps full precision. <see cref="Raw"/> marks machine text (hashes, big integers); <see cref="Href"/>
+/// makes the cell a link to another page of the report.
 /// </summary>
-public sealed record ReportCell(string Text, string? JsonPath = null, double? Value = null, bool Raw = false)
+public sealed record ReportCell(string Text, string? JsonPath = null, double? Value = null, bool Raw = false, string? Href = null)
 {
     public static ReportCell Of(string text) => new(text);
 
