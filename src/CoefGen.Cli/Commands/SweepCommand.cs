@@ -15,7 +15,7 @@ internal static class SweepCommand
 {
     public static Command Create(TextWriter output, TextWriter error)
     {
-        var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML) the study starts from." };
+        var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML) the study starts from, or an instrument file: then --vary runs over every table (in parallel), printed and written per table." };
         var vary = new Option<string[]>("--vary")
         {
             Description = "KEY=LIST (a,b,c), KEY=START:STOP:STEP or KEY=START:STOP:xFACTOR; KEY is a dotted path such as adc.rate_hz, " +
@@ -75,6 +75,17 @@ internal static class SweepCommand
         if ((csvPath is not null || plotPath is not null) && axes.Count == 0)
         {
             return DiagnosticPrinter.Fail(error, CliCodes.BadOption, csvPath is not null ? "--csv" : "--plot", "--csv and --plot need at least one --vary");
+        }
+
+        if (InstrumentRunner.IsInstrument(path))
+        {
+            if (target is not null || split || plotPath is not null || schemeWord is not null)
+            {
+                var option = target is not null ? "--target-noise-e" : split ? "--split-pixel-time" : plotPath is not null ? "--plot" : "--scheme";
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, option, "an instrument file takes --vary (with --csv, --json); for searches and plots sweep one table's readout file");
+            }
+
+            return InstrumentSweepCommand.Run(path, axes, csvPath, json, output, error);
         }
 
         if (InputFiles.ReadReadoutBytes(path, out var unreadable) is not { } bytes)
