@@ -56,7 +56,7 @@ internal static class VerifyCommand
 
             if (dumpPath is null || dumpDir is not null)
             {
-                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, dumpPath is null ? "--dut" : "--dut-dir", "a readout file takes --dut DUMP; --dut-dir is for an instrument file");
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, dumpDir is null ? "--dut" : "--dut-dir", "a readout file takes --dut DUMP; --dut-dir is for an instrument file");
             }
 
             var load = InputFiles.LoadReadout(readoutPath);

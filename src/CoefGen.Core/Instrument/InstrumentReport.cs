@@ -31,7 +31,8 @@ public static class InstrumentReport
 
     private static ReportCell T(string text) => ReportCell.Of(text);
 
-    private static ReportCell Int(string jsonPath, long v) => ReportCell.Verbatim(Human.Whole(v), jsonPath);
+    /// <summary>A count or a number of bits: the whole number, keyed like any other number cell.</summary>
+    private static ReportCell Int(string jsonPath, long v) => new(Human.Whole(v), jsonPath, v);
 
     private static ReportSection Status(InstrumentDesign d, string toolVersion)
     {

@@ -6,7 +6,7 @@ namespace CoefGen.Cli.Tests.Instrument;
 /// <summary>design, emit, check and diff on the example instrument (4 modes x 4 channels).</summary>
 public class InstrumentCommandTests
 {
-    private static string CopyExample()
+    internal static string CopyExample()
     {
         var dir = RepoPaths.TempDir();
         foreach (var f in Directory.GetFiles(RepoPaths.Example("camera4")))
