@@ -15,7 +15,7 @@ internal static class VerifyCommand
 
     public static Command Create(TextWriter output, TextWriter error)
     {
-        var file = new Argument<FileInfo>("readout") { Description = "The readout file the vectors were generated from." };
+        var file = new Argument<FileInfo>("readout") { Description = "The readout file the vectors were generated from, or an instrument file (then --dut-dir instead of --dut)." };
         var vectors = new Option<DirectoryInfo>("--vectors") { Description = "Folder written by `coefgen vectors`.", Required = true };
         var dut = new Option<FileInfo>("--dut") { Description = "The DUT's output dump: one value per pixel, one per line (required for a readout file)." };
         var format = new Option<string>("--format")
