@@ -24,7 +24,7 @@ public static class FixedPointDesigner
         ArgumentNullException.ThrowIfNull(settings);
         ArgumentNullException.ThrowIfNull(reset);
         ArgumentNullException.ThrowIfNull(signal);
-        if (grid.ResetCount != reset.Count || grid.SignalCount != signal.Count || grid.SampleIndex[^1] >= pixelSamples)
+        if ((!grid.IsCycle && (grid.ResetCount != reset.Count || grid.SignalCount != signal.Count)) || grid.SampleIndex[^1] >= pixelSamples)
         {
             throw new ArgumentException("grid, windows and pixel cycle disagree");
         }

@@ -25,7 +25,7 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
         {
             for (var j = 0; j < n; j++)
             {
-                c[(i * n) + j] = r.At(i, j);
+                c[(i * n) + j] = r.FullAt(i, j);
             }
         }
 
@@ -41,9 +41,10 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
     internal static double[] SolveOnMatrix(SampleGrid grid, double[] c, bool rejectDrift)
     {
         var n = grid.Count;
-        var basis = HouseholderBasis.Factor(ConstraintSystem.FromGrid(grid, rejectDrift));
+        var system = ConstraintSystem.FromGrid(grid, rejectDrift);
+        var basis = HouseholderBasis.Factor(system);
         var m = basis.Constraints;
-        var y = basis.SolveTransposedTriangle(rejectDrift ? [0.0, 1.0, 0.0] : [0.0, 1.0]);
+        var y = basis.SolveTransposedTriangle(system.Rhs);
 
         var scale = 0.0;
         for (var i = 0; i < n; i++)
