@@ -16,7 +16,8 @@ internal static class CycleResolver
     /// <summary>Upper bound on the expanded window count (a repetition of 10^6 is already far beyond any readout).</summary>
     private const long MaxWindows = 4_000_000;
 
-    private sealed record Placed(CycleWindow Window, CycleWindowInput Source, int Copy, SourceLocation StartLocation, string StartPath);
+    /// <summary>A window with where it came from; ChargeSample is the transfer instant in (fractional) samples, so that copies shift exactly.</summary>
+    private sealed record Placed(CycleWindow Window, CycleWindowInput Source, int Copy, SourceLocation StartLocation, string StartPath, double ChargeSample);
 
     public static TimingSpec? Resolve(CycleInput input, double? rateHz, bool poleGiven, LoadContext context)
     {
@@ -54,7 +55,8 @@ internal static class CycleResolver
             }
 
             var window = new CycleWindow(w.Name, new SampleWindow(start.Value, count.Value), w.Sees!.Value, chargeTime.Value, w.Group!.Value, 0);
-            originals.Add(new Placed(window, w, 0, w.Start!.Location, w.Start!.Path));
+            var chargeSample = w.Transfer is null ? 0.0 : w.Transfer.IsNs ? w.Transfer.Value * rate / 1e9 : w.Transfer.Value;
+            originals.Add(new Placed(window, w, 0, w.Start!.Location, w.Start!.Path, chargeSample));
         }
 
         if (pixel is null || context.ErrorCount > errorsBefore)
@@ -71,9 +73,20 @@ internal static class CycleResolver
         }
 
         placed = [.. placed.OrderBy(p => p.Window.Samples.Start).ThenBy(p => p.Window.Samples.Count)];
+        // One message per window as written: a repeated window's copies share its problem.
+        var reported = new HashSet<CycleWindowInput>(ReferenceEqualityComparer.Instance);
         foreach (var p in placed)
         {
-            CheckPlacement(p, pixel.Value, rate, context);
+            var before = context.ErrorCount;
+            if (!reported.Contains(p.Source))
+            {
+                CheckPlacement(p, pixel.Value, rate, context);
+            }
+
+            if (context.ErrorCount > before)
+            {
+                reported.Add(p.Source);
+            }
         }
 
         for (var i = 1; i < placed.Count; i++)
@@ -265,7 +278,7 @@ internal static class CycleResolver
             foreach (var m in members)
             {
                 var w = m.Window;
-                var chargeTime = w.Sees == ChargeSight.Transfer ? w.ChargeTimeS + (shift / rate) : w.ChargeTimeS;
+                var chargeTime = w.Sees == ChargeSight.Transfer ? (m.ChargeSample + shift) / rate : w.ChargeTimeS;
                 var copy = w with
                 {
                     Name = string.Create(CultureInfo.InvariantCulture, $"{w.Name}#{k}"),
@@ -273,7 +286,7 @@ internal static class CycleResolver
                     ChargeTimeS = chargeTime,
                     Read = k,
                 };
-                result.Add(new Placed(copy, m.Source, repeat.NewGroup ? k : 0, repeat.Every.Location, everyPath));
+                result.Add(new Placed(copy, m.Source, repeat.NewGroup ? k : 0, repeat.Every.Location, everyPath, m.ChargeSample + shift));
             }
         }
 
