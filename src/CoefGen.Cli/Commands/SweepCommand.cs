@@ -97,7 +97,7 @@ internal static class SweepCommand
         if (target is not null || split)
         {
             var baseResult = DesignRunner.TryRun(path, error);
-            if (baseResult is null)
+            if (baseResult is null || CycleRefusal.Refuse(baseResult.Description, "sweep", error))
             {
                 return ExitCodes.BadInput;
             }

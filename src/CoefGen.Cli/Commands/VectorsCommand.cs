@@ -35,7 +35,7 @@ internal static class VectorsCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null)
+            if (result is null || CycleRefusal.Refuse(result.Description, "vectors", error))
             {
                 return ExitCodes.BadInput;
             }
