@@ -92,6 +92,9 @@ public static class FixedPointDesigner
             GainErrorPpm = gainErrorPpm,
             NoisePenaltyPercent = 100 * ((sigmaInt / sigmaReal) - 1),
             PredictedNoiseOutputLsb = Math.Sqrt((outSigma * outSigma) + (1.0 / 12)),
+            Windows = grid.IsCycle ? grid.Windows : null,
+            GroupCount = grid.GroupCount,
+            ReadCount = grid.Windows.Max(w => w.Read) + 1,
         };
     }
 

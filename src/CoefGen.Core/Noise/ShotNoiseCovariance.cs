@@ -88,4 +88,27 @@ public sealed class ShotNoiseCovariance
 
         return total * RateV2PerS;
     }
+
+    /// <summary>
+    /// Adds one draw of the shot noise (V) to <paramref name="destination"/>: per reset group a random walk in time
+    /// order with independent Gaussian increments of variance F * (tau_i - tau_previous), from the integration start.
+    /// </summary>
+    public void AddDraw(Func<double> standardNormal, double[] destination)
+    {
+        ArgumentNullException.ThrowIfNull(standardNormal);
+        ArgumentNullException.ThrowIfNull(destination);
+        var walk = new Dictionary<int, (double Value, double Tau)>();
+        for (var i = 0; i < _tau.Length; i++)
+        {
+            if (!double.IsFinite(_tau[i]))
+            {
+                continue;
+            }
+
+            var (value, tau) = walk.GetValueOrDefault(_group[i], (0.0, 0.0));
+            value += Math.Sqrt(RateV2PerS * Math.Max(0, _tau[i] - tau)) * standardNormal();
+            walk[_group[i]] = (value, _tau[i]);
+            destination[i] += value;
+        }
+    }
 }

@@ -62,6 +62,7 @@ public static class GoldenVectorGenerator
                 _ => (PixelKind.Noise, 0.0),
             };
             sampler.Sample(rng, noise);
+            result.Covariance.Shot?.AddDraw(rng.NextGaussian, noise);
             stimuli.Add((kind, charge, shape.Noisy(charge, noise, rng)));
         }
 
@@ -87,6 +88,11 @@ public static class GoldenVectorGenerator
     private static IReadOnlyList<double> CycleStep(ReadoutDescription d)
     {
         var t = d.Timing;
+        if (t.Cycle is not null)
+        {
+            return SampleGrid.StepAtEverySample(d.Adc.RateHz, t.Cycle, t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null, t.PixelSamples);
+        }
+
         if (t.PixelSamples < 2)
         {
             return [0.0];

@@ -108,4 +108,20 @@ public sealed partial class SampleGrid
 
         return new SampleGrid(index, time, step, rateHz, group, cycle.GroupCount, windows, exposure);
     }
+
+    /// <summary>
+    /// The step response at every sample of the cycle (0 .. <paramref name="pixelSamples"/>-1): each window's samples by
+    /// <see cref="FromCycle"/>'s rule, 0 outside the windows (those samples carry no weight).
+    /// </summary>
+    public static double[] StepAtEverySample(double rateHz, CycleSpec cycle, double? poleHz, int pixelSamples)
+    {
+        var grid = FromCycle(rateHz, cycle, poleHz);
+        var step = new double[pixelSamples];
+        for (var i = 0; i < grid.Count; i++)
+        {
+            step[grid.SampleIndex[i]] = grid.Step[i];
+        }
+
+        return step;
+    }
 }
