@@ -30,7 +30,7 @@ internal static class EmitCommand
         {
             var path = parse.GetRequiredValue(file).ToString();
             var result = DesignRunner.TryRun(path, error);
-            if (result is null || CycleRefusal.Refuse(result.Description, "emit", error))
+            if (result is null)
             {
                 return ExitCodes.BadInput;
             }

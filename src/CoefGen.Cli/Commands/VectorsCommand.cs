@@ -35,7 +35,7 @@ internal static class VectorsCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null || CycleRefusal.Refuse(result.Description, "vectors", error))
+            if (result is null)
             {
                 return ExitCodes.BadInput;
             }

@@ -41,11 +41,6 @@ internal static class VerifyCommand
                 return DiagnosticPrinter.PrintFailure(error, load.Diagnostics);
             }
 
-            if (CycleRefusal.Refuse(load.Description, "verify", error))
-            {
-                return ExitCodes.BadInput;
-            }
-
             var manifestPath = Path.Combine(dir, VectorFileNames.Manifest);
             if (Read(manifestPath, error) is not { } manifestText)
             {
