@@ -56,9 +56,24 @@ public class CycleCommandTests
     }
 
     [Fact]
-    public void Report_refuses_a_cycle_with_a_located_error()
+    public void Report_of_a_cycle_lists_its_windows_and_sweeps_take_the_read_count()
     {
-        var r = CliRunner.Run("report", Cycle("cms_rows.toml"), "-o", RepoPaths.TempDir());
+        var dir = RepoPaths.TempDir();
+        var r = CliRunner.Run("report", Cycle("cms_rows.toml"), "-o", dir);
+        Assert.True(r.ExitCode == 0, r.Error);
+        var md = File.ReadAllText(Path.Combine(dir, "report.md"));
+        Assert.Contains("window 'signal#3' (charge after its transfer, reset group 3) start", md, StringComparison.Ordinal);
+
+        var sweep = CliRunner.Run("sweep", Cycle("cms_rows.toml"), "--vary", "timing.repeat.times=1,4", "--json");
+        Assert.True(sweep.ExitCode == 0, sweep.Error);
+        using var doc = JsonDocument.Parse(sweep.Output);
+        Assert.Equal(2, doc.RootElement.GetProperty("points").GetArrayLength());
+    }
+
+    [Fact]
+    public void Window_searches_refuse_a_cycle_with_a_located_error()
+    {
+        var r = CliRunner.Run("sweep", Cycle("cms_rows.toml"), "--split-pixel-time");
         Assert.Equal(2, r.ExitCode);
         Assert.Contains("CG1255", r.Error, StringComparison.Ordinal);
     }

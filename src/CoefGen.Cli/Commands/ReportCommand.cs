@@ -25,7 +25,7 @@ internal static class ReportCommand
         {
             var path = parse.GetRequiredValue(file).ToString();
             var result = DesignRunner.TryRun(path, error);
-            if (result is null || CycleRefusal.Refuse(result.Description, "report", error))
+            if (result is null)
             {
                 return ExitCodes.BadInput;
             }

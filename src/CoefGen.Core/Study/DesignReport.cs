@@ -41,12 +41,23 @@ public static class DesignReport
             new[] { T("gain to the ADC"), N("readout.sensor.gain", d.Sensor.Gain), T("V/V") },
             new[] { T("volts at the ADC per electron"), N("readout.sensor.v_at_adc_per_e", d.Sensor.VoltsAtAdcPerElectron), T("V/e-") },
             new[] { T("pixel cycle"), N("readout.timing.pixel_samples", t.PixelSamples), T("samples") },
-            new[] { T("charge transfer"), N("readout.timing.transfer_time_s", t.TransferTimeS), T("s") },
-            new[] { T("reset window start"), N("readout.timing.reset.start", t.Reset.Start), T("sample") },
-            new[] { T("reset window length"), N("readout.timing.reset.count", t.Reset.Count), T("samples") },
-            new[] { T("signal window start"), N("readout.timing.signal.start", t.Signal.Start), T("sample") },
-            new[] { T("signal window length"), N("readout.timing.signal.count", t.Signal.Count), T("samples") },
         };
+        if (t.Cycle is not null)
+        {
+            rows.AddRange(CycleReportRows.Rows(t.Cycle));
+        }
+        else
+        {
+            rows.AddRange(
+            [
+                new[] { T("charge transfer"), N("readout.timing.transfer_time_s", t.TransferTimeS), T("s") },
+                new[] { T("reset window start"), N("readout.timing.reset.start", t.Reset.Start), T("sample") },
+                new[] { T("reset window length"), N("readout.timing.reset.count", t.Reset.Count), T("samples") },
+                new[] { T("signal window start"), N("readout.timing.signal.start", t.Signal.Start), T("sample") },
+                new[] { T("signal window length"), N("readout.timing.signal.count", t.Signal.Count), T("samples") },
+            ]);
+        }
+
         if (d.Noise.FrontEndPoleHz is double pole)
         {
             rows.Add([T("front-end pole"), N("readout.noise.front_end_pole_hz", pole), T("Hz")]);
@@ -88,15 +99,13 @@ public static class DesignReport
     private static ReportSection Weights(DesignResult r)
     {
         // NaN between the windows breaks each line at the gap (the weights are zero there, not interpolated).
-        var reset = r.Grid.ResetCount;
-        var micro = r.Grid.TimeS.Select(x => x * 1e6).ToList();
-        micro.Insert(reset, double.NaN);
+        var micro = CycleReportRows.WithBreaks(r.Grid, r.Grid.TimeS.Select(x => x * 1e6).ToArray());
         var chart = new SvgLineChart
         {
             Title = "Weights over the pixel cycle",
             XLabel = "time from the start of the pixel cycle (us)",
             YLabel = "weight h (ADU per ADU)",
-            Series = [.. r.Weights.Select(w => new ChartSeries(w.Label, micro, [.. w.H.Take(reset), double.NaN, .. w.H.Skip(reset)]))],
+            Series = [.. r.Weights.Select(w => new ChartSeries(w.Label, micro, CycleReportRows.WithBreaks(r.Grid, w.H)))],
         }.Render();
         return new ReportSection("Weights against time", [new ReportBlock
         {
