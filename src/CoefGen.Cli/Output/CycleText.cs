@@ -68,4 +68,21 @@ internal static class CycleText
         sb.Append(table.Render());
         sb.Append('\n');
     }
+
+    /// <summary>Repeated identical reads: the two-stage form (per-read table x per-read weights) and its penalty.</summary>
+    public static void AppendTwoStage(StringBuilder sb, DesignResult r)
+    {
+        var two = CoefGen.Core.Weights.TwoStage.TwoStageWeights.Design(r.Grid, r.Covariance, r.Description.Weights.RejectDrift);
+        if (two is null)
+        {
+            return;
+        }
+
+        var perElectron = r.Description.Sensor.VoltsAtAdcPerElectron;
+        var sigma = Math.Sqrt(two.VarianceV2) / perElectron;
+        var optimal = r.Predictions[^1].SigmaElectrons;
+        var average = r.Predictions[0].SigmaElectrons;
+        sb.Append($"Two-stage form (one table of {two.PerReadTable.Length} weights per read x {two.ReadWeights.Length} read weights, designed jointly in {two.Iterations} alternating steps)\n");
+        sb.Append($"  {Eng.Num(sigma)} e- rms: x{Eng.Num(sigma / optimal, 6)} of the full optimum ({Eng.Num(optimal)} e-), x{Eng.Num(sigma / average, 6)} of the plain average ({Eng.Num(average)} e-); not quantised or emitted (the tables above are the full cycle's)\n\n");
+    }
 }

@@ -17,6 +17,7 @@ internal static class DesignText
         NoiseTable(sb, r);
         Budget(sb, r);
         CycleText.AppendSignalLevels(sb, r);
+        CycleText.AppendTwoStage(sb, r);
         FixedPointText.Append(sb, r);
         WeightsText.Append(sb, r, allWeights);
         return sb.ToString();

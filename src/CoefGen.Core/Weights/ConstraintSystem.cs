@@ -25,6 +25,9 @@ internal sealed class ConstraintSystem
 
     public int Constraints => Columns.Length;
 
+    /// <summary>Any constraint set A^T h = b (small problems of the two-stage design).</summary>
+    public static ConstraintSystem Of(double[][] columns, double[] rhs) => new(columns, rhs);
+
     public static ConstraintSystem FromGrid(SampleGrid grid, bool rejectDrift)
     {
         ArgumentNullException.ThrowIfNull(grid);
