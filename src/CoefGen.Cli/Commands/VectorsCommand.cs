@@ -46,12 +46,6 @@ internal static class VectorsCommand
                 DiagnosticPrinter.Print(error, [UnsafeDesign.Describe(result, asError: false)]);
             }
 
-            if (result.Datapath.Coefficients.Count > CorrelatedNoiseSampler.MaxSamples)
-            {
-                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(VectorCodes.TooManySamples, SourceLocation.FileOnly(path),
-                    $"{result.Datapath.Coefficients.Count} weighted samples; the vector generator handles up to {CorrelatedNoiseSampler.MaxSamples}")]);
-            }
-
             var files = new List<(string Name, byte[] Bytes)>();
             if (!parse.GetValue(noRtl))
             {
@@ -73,6 +67,11 @@ internal static class VectorsCommand
             foreach (var (name, bytes) in files)
             {
                 AtomicFile.WriteAllBytes(Path.Combine(dir, name), bytes);
+            }
+
+            if (set.SamplerNote is string note)
+            {
+                DiagnosticPrinter.Print(error, [Diagnostic.Warning(VectorCodes.EmbeddingClipped, SourceLocation.FileOnly(path), note)]);
             }
 
             var kinds = set.Pixels.GroupBy(p => p.Kind).Count();

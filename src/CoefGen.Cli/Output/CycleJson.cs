@@ -29,12 +29,7 @@ internal static class CycleJson
             w.WriteString("name", window.Name);
             w.WriteNumber("start", window.Samples.Start);
             w.WriteNumber("count", window.Samples.Count);
-            w.WriteString("sees", window.Sees switch
-            {
-                ChargeSight.None => "reset",
-                ChargeSight.Transfer => "charge",
-                _ => "ramp",
-            });
+            w.WriteString("sees", ChargeSightWords.Word(window.Sees));
             w.WriteNumber("charge_time_s", window.ChargeTimeS);
             w.WriteNumber("group", window.ResetGroup);
             w.WriteNumber("read", window.Read);

@@ -39,12 +39,7 @@ internal static class CycleModel
         Set(o, "first_coef", w.First);
         Set(o, "group", w.Group);
         Set(o, "read", w.Read);
-        Set(o, "sees", w.Sees switch
-        {
-            ChargeSight.None => "reset",
-            ChargeSight.Transfer => "charge",
-            _ => "ramp",
-        });
+        Set(o, "sees", ChargeSightWords.Word(w.Sees));
         o.IsReadOnly = true;
         return o;
     }

@@ -12,3 +12,14 @@ public enum ChargeSight
     /// <summary>Charge integrating from a stated instant: s grows linearly with time (read up the ramp, Fowler-N).</summary>
     Ramp,
 }
+
+/// <summary>The readout file's words for <see cref="ChargeSight"/> (sees = "reset" | "charge" | "ramp").</summary>
+public static class ChargeSightWords
+{
+    public static string Word(ChargeSight sees) => sees switch
+    {
+        ChargeSight.None => "reset",
+        ChargeSight.Transfer => "charge",
+        _ => "ramp",
+    };
+}

@@ -17,12 +17,7 @@ public static partial class ReadoutWriter
             Line(w, "name", Str(window.Name));
             Line(w, "start", Int(window.Samples.Start));
             Line(w, "count", Int(window.Samples.Count));
-            Line(w, "sees", Str(window.Sees switch
-            {
-                ChargeSight.None => "reset",
-                ChargeSight.Transfer => "charge",
-                _ => "ramp",
-            }));
+            Line(w, "sees", Str(ChargeSightWords.Word(window.Sees)));
             if (window.Sees == ChargeSight.Transfer)
             {
                 Line(w, "transfer_sample", Num(TransferSample(window.ChargeTimeS, rateHz)));

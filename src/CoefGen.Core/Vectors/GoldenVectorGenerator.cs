@@ -47,7 +47,10 @@ public static class GoldenVectorGenerator
         var baseline = adc.MinCode + (BaselineSpanFraction * span) + BaselineFractionAdu;
         var fullCharge = adc.MaxCode - baseline;
         var step = CycleStep(d);
-        var sampler = CorrelatedNoiseSampler.Create(result.Covariance, result.Noise);
+        // Dense Cholesky up to its limit (exact, unchanged results); above it circulant embedding of the stationary part.
+        IAnalogNoiseSampler sampler = result.Covariance.Count <= CorrelatedNoiseSampler.MaxSamples
+            ? CorrelatedNoiseSampler.Create(result.Covariance, result.Noise)
+            : CirculantNoiseSampler.Create(result.Covariance, result.Noise, d.Adc.RateHz);
         var rng = new Xoshiro256StarStar(options.Seed);
         var shape = new CycleShape(design, adc, baseline, step);
 
@@ -80,6 +83,7 @@ public static class GoldenVectorGenerator
             AduPerElectron = d.Sensor.VoltsAtAdcPerElectron / adc.LsbV,
             AddedConstantV2 = sampler.AddedConstantV2,
             DiagonalLoadingV2 = sampler.DiagonalLoadingV2,
+            SamplerNote = sampler.Note,
             Pixels = pixels,
         };
     }

@@ -28,5 +28,8 @@ public sealed record GoldenVectorSet
 
     public required double DiagonalLoadingV2 { get; init; }
 
+    /// <summary>What the noise sampler had to do that changes the drawn covariance (a clipped circulant embedding), or null.</summary>
+    public string? SamplerNote { get; init; }
+
     public required IReadOnlyList<GoldenPixel> Pixels { get; init; }
 }
