@@ -41,6 +41,23 @@ internal static class ArtefactPlan
         return list;
     }
 
+    /// <summary>Where each entry's output name comes from, to locate a name the file system refuses (same order as <see cref="Entries"/>).</summary>
+    public static IReadOnlyList<string> Origins(DesignResult r, IReadOnlyList<string> formats, string? template)
+    {
+        var list = formats.Select(_ => r.Description.LocationOf("name").ToString()).ToList();
+        if (template is not null)
+        {
+            list.Add("--template-out");
+        }
+
+        if (list.Count == 0)
+        {
+            list.AddRange(r.Description.Emit.Select((_, i) => r.Description.LocationOf($"emit[{i}].path").ToString()));
+        }
+
+        return list;
+    }
+
     /// <summary>Renders everything in memory; on failure prints the diagnostics and returns null.</summary>
     public static IReadOnlyList<RenderedArtefact>? Render(DesignResult r, IReadOnlyList<(string Template, string OutputPath)> entries, TextWriter error)
     {
@@ -62,8 +79,18 @@ internal static class ArtefactPlan
             }
         }
 
-        var model = TemplateModel.Create(r.Datapath, ProvenanceOf(r));
         var userBase = Path.GetDirectoryName(Path.GetFullPath(r.Description.SourcePath)) ?? ".";
+        var unreadable = entries.Where(e => !BuiltinTemplates.TryGet(e.Template, out _))
+            .Select(e => InputFile.TryRead(Path.Combine(userBase, e.Template), "template", InputFile.TemplateLimit,
+                TemplateLocation(r, e.Template), TemplateDiagnosticCodes.TemplateNotFound, null, out var problem) is null ? problem : null)
+            .OfType<Diagnostic>().ToList();
+        if (unreadable.Count > 0)
+        {
+            DiagnosticPrinter.PrintFailure(error, unreadable);
+            return null;
+        }
+
+        var model = TemplateModel.Create(r.Datapath, ProvenanceOf(r));
         var result = ArtefactRenderer.RenderAll(model, entries, ResourceLocator.TemplatesDir, userBase);
         if (!result.Succeeded)
         {
@@ -73,6 +100,13 @@ internal static class ArtefactPlan
 
         DiagnosticPrinter.Print(error, result.Diagnostics);
         return result.Artefacts;
+    }
+
+    /// <summary>Where a template path was written: its [[emit]] entry in the readout file, else the path itself (--template).</summary>
+    private static SourceLocation TemplateLocation(DesignResult r, string template)
+    {
+        var i = r.Description.Emit.ToList().FindIndex(e => e.Template == template);
+        return i >= 0 ? r.Description.LocationOf($"emit[{i}].template") : SourceLocation.FileOnly(template);
     }
 
     public static string DefaultOutDir(string readoutPath) => Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";

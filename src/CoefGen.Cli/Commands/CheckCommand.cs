@@ -1,4 +1,5 @@
 using System.CommandLine;
+using CoefGen.Cli.Io;
 using CoefGen.Core.Emit;
 
 namespace CoefGen.Cli.Commands;
@@ -37,7 +38,8 @@ internal static class CheckCommand
             var entries = StalenessCheck.Compare(artefacts, rel =>
             {
                 var p = Path.Combine(dir, rel);
-                return File.Exists(p) ? File.ReadAllBytes(p) : null;
+                // Only a regular file can be up to date (a FIFO would block the read, a folder cannot match).
+                return FileKind.Of(p) == FileKindValue.Regular ? File.ReadAllBytes(p) : null;
             });
             foreach (var e in entries)
             {

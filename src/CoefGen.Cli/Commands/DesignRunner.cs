@@ -53,15 +53,9 @@ internal static class DesignRunner
     private static SampleCapture? LoadCapture(ReadoutDescription d, string readoutPath, string capturePath, TextWriter error)
     {
         var path = InputFiles.ResolveRelative(readoutPath, capturePath);
-        byte[] bytes;
-        try
+        if (InputFile.TryRead(path, "capture", InputFile.CaptureLimit, d.LocationOf("noise.capture"), CaptureCodes.Unreadable, "noise.capture", out var problem) is not { } bytes)
         {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            var reason = ex is FileNotFoundException or DirectoryNotFoundException ? "file not found" : ex.Message;
-            DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.Unreadable, d.LocationOf("noise.capture"), $"cannot read the capture '{capturePath}': {reason}", "noise.capture")]);
+            DiagnosticPrinter.PrintFailure(error, [problem!]);
             return null;
         }
 

@@ -20,8 +20,8 @@ internal static class EmitCommand
         var templateOut = new Option<string?>("--template-out") { Description = "Output name for --template (default: the template's name without its last extension)." };
         var cmd = new Command(
             "emit",
-            "Render the chosen scheme's integer design through the templates and write each file atomically " +
-            "(temporary file, then rename). Nothing is written when any template or path fails, or when the width proof says the " +
+            "Render the chosen scheme's integer design through the templates and write the files all-or-nothing " +
+            "(staged in a temporary folder, then moved into place; files whose bytes do not change are left alone). Nothing is written when any template or path fails, or when the width proof says the " +
             "datapath can overflow (unless --allow-unsafe). Exit 2 on bad input.")
         {
             file, outDir, formats, template, templateOut, allowUnsafe,
@@ -40,19 +40,31 @@ internal static class EmitCommand
                 return refused;
             }
 
-            var entries = ArtefactPlan.Entries(result, parse.GetValue(formats) ?? [], parse.GetValue(template)?.ToString(), parse.GetValue(templateOut));
+            var chosenFormats = parse.GetValue(formats) ?? [];
+            var chosenTemplate = parse.GetValue(template)?.ToString();
+            var entries = ArtefactPlan.Entries(result, chosenFormats, chosenTemplate, parse.GetValue(templateOut));
             var artefacts = ArtefactPlan.Render(result, entries, error);
             if (artefacts is null)
             {
                 return ExitCodes.BadInput;
             }
 
+            var origins = ArtefactPlan.Origins(result, chosenFormats, chosenTemplate);
             var dir = parse.GetValue(outDir)?.FullName ?? ArtefactPlan.DefaultOutDir(path);
-            foreach (var a in artefacts)
+            using var batch = new OutputBatch();
+            for (var i = 0; i < artefacts.Count; i++)
             {
-                var target = Path.Combine(dir, a.RelativePath);
-                AtomicFile.WriteAllBytes(target, a.ToBytes());
-                output.WriteLine($"wrote {Path.GetRelativePath(Directory.GetCurrentDirectory(), target)}");
+                batch.Add(dir, "--out", artefacts[i].RelativePath, artefacts[i].ToBytes(), origins[i]);
+            }
+
+            if (batch.Commit(error) is not { } written)
+            {
+                return ExitCodes.BadInput;
+            }
+
+            foreach (var (file, unchanged) in written)
+            {
+                output.WriteLine(unchanged ? $"unchanged {file}" : $"wrote {file}");
             }
 
             return ExitCodes.Ok;

@@ -56,23 +56,17 @@ internal static class FitCommand
             case "raw16": encoding = CaptureEncoding.Raw16; break;
             case "raw32": encoding = CaptureEncoding.Raw32; break;
             default:
-                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.WrongLayout, file, $"--format '{format}' is not allowed; allowed: csv, raw16, raw32")]);
+                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.WrongLayout, SourceLocation.FileOnly("--format"), $"'{SafeText.Excerpt(format)}' is not allowed; allowed: csv, raw16, raw32")]);
         }
 
         if (segment is int l && (l < 64 || (l & (l - 1)) != 0))
         {
-            return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.TooFewSamples, file, $"--segment {l} must be a power of two >= 64")]);
+            return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.TooFewSamples, SourceLocation.FileOnly("--segment"), $"--segment {l} must be a power of two >= 64")]);
         }
 
-        byte[] bytes;
-        try
+        if (InputFile.TryRead(capturePath, "capture", InputFile.CaptureLimit, file, CaptureCodes.Unreadable, null, out var problem) is not { } bytes)
         {
-            bytes = File.ReadAllBytes(capturePath);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            var reason = ex is FileNotFoundException or DirectoryNotFoundException ? "file not found" : ex.Message;
-            return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CaptureCodes.Unreadable, file, $"cannot read the capture: {reason}")]);
+            return DiagnosticPrinter.PrintFailure(error, [problem!]);
         }
 
         var layout = stream ? CaptureLayout.Stream : CaptureLayout.PixelSynchronous;
@@ -92,13 +86,20 @@ internal static class FitCommand
             return DiagnosticPrinter.PrintFailure(error, ex.Diagnostics);
         }
 
+        DiagnosticPrinter.Print(error, analysis.Warnings);
         if (outDir is not null)
         {
-            AtomicFile.WriteAllText(Path.Combine(outDir, "fit_spectrum.csv"), FitFiles.SpectrumCsv(analysis));
-            AtomicFile.WriteAllText(Path.Combine(outDir, "fit_spectrum.svg"), FitFiles.SpectrumSvg(analysis));
+            using var batch = new OutputBatch();
+            batch.Add(outDir, "--out", "fit_spectrum.csv", AtomicFile.Encode(FitFiles.SpectrumCsv(analysis)), "--out");
+            batch.Add(outDir, "--out", "fit_spectrum.svg", AtomicFile.Encode(FitFiles.SpectrumSvg(analysis)), "--out");
             if (analysis.Validation.Count > 0)
             {
-                AtomicFile.WriteAllText(Path.Combine(outDir, "fit_weights.csv"), FitFiles.WeightsCsv(analysis));
+                batch.Add(outDir, "--out", "fit_weights.csv", AtomicFile.Encode(FitFiles.WeightsCsv(analysis)), "--out");
+            }
+
+            if (batch.Commit(error) is null)
+            {
+                return ExitCodes.BadInput;
             }
         }
 

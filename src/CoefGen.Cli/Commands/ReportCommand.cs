@@ -53,13 +53,19 @@ internal static class ReportCommand
             var markdown = ReportMarkdown.Render(title, sections, charts);
             var html = ReportHtml.Render(title, sections);
             var dir = parse.GetRequiredValue(outDir).FullName;
+            using var batch = new OutputBatch();
             foreach (var (name, svg) in charts)
             {
-                AtomicFile.WriteAllText(Path.Combine(dir, name), svg);
+                batch.Add(dir, "--out", name, AtomicFile.Encode(svg), "--out");
             }
 
-            AtomicFile.WriteAllText(Path.Combine(dir, "report.md"), markdown);
-            AtomicFile.WriteAllText(Path.Combine(dir, "report.html"), html);
+            batch.Add(dir, "--out", "report.md", AtomicFile.Encode(markdown), "--out");
+            batch.Add(dir, "--out", "report.html", AtomicFile.Encode(html), "--out");
+            if (batch.Commit(error) is null)
+            {
+                return ExitCodes.BadInput;
+            }
+
             output.WriteLine($"wrote {Path.Combine(dir, "report.html")} and report.md with {charts.Count} charts");
             return ExitCodes.Ok;
         });

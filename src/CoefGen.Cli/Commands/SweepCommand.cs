@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using System.Text;
+using CoefGen.Cli.Diagnostics;
 using CoefGen.Cli.Io;
 using CoefGen.Cli.Output;
 using CoefGen.Core.Diagnostics;
@@ -25,7 +26,7 @@ internal static class SweepCommand
         var json = new Option<bool>("--json") { Description = "Print JSON (schema coefgen.sweep/1) instead of tables." };
         var target = new Option<double?>("--target-noise-e") { Description = "Find the smallest equal reset/signal window count (in samples) whose read noise meets this many e- rms." };
         var split = new Option<bool>("--split-pixel-time") { Description = "For the file's pixel cycle, find the split between reset window, dead time and signal window with the lowest read noise." };
-        var scheme = new Option<string?>("--scheme") { Description = "Scheme the searches optimise: boxcar, weighted or optimal (default: the file's weights.scheme)." };
+        var scheme = new Option<string?>("--scheme") { Description = "Scheme the searches optimise: boxcar, weighted, optimal or robust (default: the file's weights.scheme)." };
         var cmd = new Command(
             "sweep",
             "Design the readout at many points: vary numeric keys over a grid and tabulate the read noise of every scheme and the " +
@@ -45,8 +46,7 @@ internal static class SweepCommand
     {
         if (vary.Length == 0 && target is null && !split)
         {
-            error.WriteLine("error: give --vary KEY=VALUES, --target-noise-e X or --split-pixel-time (see coefgen sweep --help)");
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "sweep", "give --vary KEY=VALUES, --target-noise-e X or --split-pixel-time (see coefgen sweep --help)");
         }
 
         var axes = new List<SweepAxis>();
@@ -55,8 +55,13 @@ internal static class SweepCommand
             var axis = SweepAxis.TryParse(spec, out var problem);
             if (axis is null)
             {
-                error.WriteLine($"error: --vary {problem}");
-                return ExitCodes.BadInput;
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--vary", SafeText.Excerpt(problem ?? "cannot read the spec", 300));
+            }
+
+            if (axes.Any(a => a.Key == axis.Key))
+            {
+                return DiagnosticPrinter.Fail(error, CliCodes.SweepDuplicateKey, "--vary",
+                    $"'{SafeText.Excerpt(axis.Key)}' is varied twice; give all its values in one --vary (a,b,c or START:STOP:STEP)");
             }
 
             axes.Add(axis);
@@ -64,25 +69,17 @@ internal static class SweepCommand
 
         if (axes.Aggregate(1L, (n, a) => n * a.Values.Count) > Sweep.MaxPoints)
         {
-            error.WriteLine($"error: the grid has more than {Sweep.MaxPoints.ToString(CultureInfo.InvariantCulture)} points; use fewer values");
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--vary", $"the grid has more than {Sweep.MaxPoints.ToString(CultureInfo.InvariantCulture)} points; use fewer values");
         }
 
         if ((csvPath is not null || plotPath is not null) && axes.Count == 0)
         {
-            error.WriteLine("error: --csv and --plot need at least one --vary");
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.Fail(error, CliCodes.BadOption, csvPath is not null ? "--csv" : "--plot", "--csv and --plot need at least one --vary");
         }
 
-        byte[] bytes;
-        try
+        if (InputFiles.ReadReadoutBytes(path, out var unreadable) is not { } bytes)
         {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
-        {
-            DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG0002", SourceLocation.FileOnly(path), "cannot read the readout file: " + ex.Message)]);
-            return ExitCodes.BadInput;
+            return DiagnosticPrinter.PrintFailure(error, [unreadable!]);
         }
 
         var text = new UTF8Encoding(false).GetString(bytes);
@@ -107,15 +104,18 @@ internal static class SweepCommand
             chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
             if (chosen is null)
             {
-                error.WriteLine($"error: --scheme '{schemeWord}': expected boxcar, weighted or optimal");
-                return ExitCodes.BadInput;
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--scheme", $"'{SafeText.Excerpt(schemeWord ?? "")}': expected boxcar, weighted, optimal or robust");
             }
 
             if (target is double t && !(t > 0 && double.IsFinite(t)))
             {
-                error.WriteLine("error: --target-noise-e must be a positive number of electrons");
-                return ExitCodes.BadInput;
+                return DiagnosticPrinter.Fail(error, CliCodes.BadOption, "--target-noise-e", "must be a positive number of electrons");
             }
+        }
+
+        if (SweepChecks.UnknownKey(text, path, axes) is { } unknown)
+        {
+            return DiagnosticPrinter.PrintFailure(error, [unknown]);
         }
 
         SweepResult? sweep = null;
@@ -125,18 +125,31 @@ internal static class SweepCommand
             var bar = ReferenceEquals(error, Console.Error) && !Console.IsErrorRedirected ? new SweepProgress(error, total) : null;
             sweep = Sweep.Run(text, point, axes, progress: bar is null ? null : bar.Report);
             bar?.Finish();
+            if (sweep.Points.All(p => !p.Outcome.Valid))
+            {
+                return DiagnosticPrinter.PrintFailure(error, SweepChecks.AllInvalid(sweep));
+            }
         }
 
         var targetResult = target is double x ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
         var splitResult = split ? PixelSplitSearch.Run(text, baseline!, point, chosen!.Value) : null;
-        if (sweep is not null && csvPath is not null)
+        if (sweep is not null && (csvPath is not null || plotPath is not null))
         {
-            AtomicFile.WriteAllText(csvPath, SweepCsv.Render(sweep));
-        }
+            using var batch = new OutputBatch();
+            if (csvPath is not null)
+            {
+                AddFile(batch, csvPath, "--csv", SweepCsv.Render(sweep));
+            }
 
-        if (sweep is not null && plotPath is not null)
-        {
-            AtomicFile.WriteAllText(plotPath, SweepPlot.Render(sweep));
+            if (plotPath is not null)
+            {
+                AddFile(batch, plotPath, "--plot", SweepPlot.Render(sweep));
+            }
+
+            if (batch.Commit(error) is null)
+            {
+                return ExitCodes.BadInput;
+            }
         }
 
         if (json)
@@ -165,29 +178,24 @@ internal static class SweepCommand
         return ExitCodes.Ok;
     }
 
+    private static void AddFile(OutputBatch batch, string path, string option, string text)
+    {
+        var full = Path.GetFullPath(path);
+        batch.Add(Path.GetDirectoryName(full)!, option, Path.GetFileName(full), AtomicFile.Encode(text), option);
+    }
+
     private static WeightScheme? ParseScheme(string word) => word switch
     {
         "boxcar" => WeightScheme.Boxcar,
         "weighted" => WeightScheme.Weighted,
         "optimal" => WeightScheme.Optimal,
+        "robust" => WeightScheme.Robust,
         _ => null,
     };
 
     private static DesignPoint PointFor(string readoutPath)
     {
         var baseDir = Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";
-        return new DesignPoint(readoutPath, relative => ReadRelative(baseDir, relative), InputFiles.LoadTargets());
-    }
-
-    private static byte[]? ReadRelative(string baseDir, string relative)
-    {
-        try
-        {
-            return File.ReadAllBytes(Path.Combine(baseDir, relative));
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            return null;
-        }
+        return new DesignPoint(readoutPath, relative => InputFiles.ReadRelative(baseDir, relative, out _), InputFiles.LoadTargets());
     }
 }

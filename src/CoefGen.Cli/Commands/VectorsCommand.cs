@@ -20,7 +20,7 @@ internal static class VectorsCommand
             "vectors",
             "Write golden stimulus (noise with the model's covariance, known charges, a DC offset, rails, the proof's worst cases) " +
             "and the bit-exact expected outputs as hex, decimal and CSV with a manifest, plus a reference datapath and " +
-            "testbenches (VHDL, Verilog, C). Every file is written atomically. Exit 2 on bad input.")
+            "testbenches (VHDL, Verilog, C). The files are written all-or-nothing (staged, then moved into place). Exit 2 on bad input.")
         {
             file, outDir, pixels, seed, noRtl,
         };
@@ -64,9 +64,15 @@ internal static class VectorsCommand
             var set = GoldenVectorGenerator.Generate(result, new VectorOptions(n, parse.GetValue(seed)));
             files.AddRange(VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version).Select(f => (f.Name, AtomicFile.Encode(f.Text))));
             var dir = parse.GetRequiredValue(outDir).FullName;
+            using var batch = new OutputBatch();
             foreach (var (name, bytes) in files)
             {
-                AtomicFile.WriteAllBytes(Path.Combine(dir, name), bytes);
+                batch.Add(dir, "--out", name, bytes, "--out");
+            }
+
+            if (batch.Commit(error) is null)
+            {
+                return ExitCodes.BadInput;
             }
 
             if (set.SamplerNote is string note)

@@ -10,20 +10,18 @@ internal static class InputFiles
     /// <summary>Loads and validates a readout file; a missing or unreadable file is a diagnostic, not an exception.</summary>
     public static LoadResult LoadReadout(string path)
     {
-        byte[] content;
-        try
+        if (ReadReadoutBytes(path, out var problem) is not { } content)
         {
-            content = File.ReadAllBytes(path);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            var reason = ex is FileNotFoundException or DirectoryNotFoundException ? "file not found" : ex.Message;
-            return new LoadResult(null, [Diagnostic.Error("CG0002", SourceLocation.FileOnly(path), $"cannot read the readout file: {reason}")]);
+            return new LoadResult(null, [problem!]);
         }
 
         var baseDir = Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".";
-        return ReadoutLoader.Load(content, path, relative => ReadRelative(baseDir, relative));
+        return ReadoutLoader.Load(content, path, (string relative, out string? why) => ReadRelative(baseDir, relative, out why));
     }
+
+    /// <summary>The readout file's bytes (a regular file within <see cref="InputFile.ReadoutLimit"/>), or null with the diagnostic.</summary>
+    public static byte[]? ReadReadoutBytes(string path, out Diagnostic? problem) =>
+        InputFile.TryRead(path, "readout file", InputFile.ReadoutLimit, SourceLocation.FileOnly(path), "CG0002", null, out problem);
 
     /// <summary>All target profiles shipped with the tool.</summary>
     public static TargetCatalog LoadTargets()
@@ -44,15 +42,7 @@ internal static class InputFiles
         return Path.GetFullPath(Path.Combine(baseDir, relative));
     }
 
-    private static byte[]? ReadRelative(string baseDir, string relative)
-    {
-        try
-        {
-            return File.ReadAllBytes(Path.Combine(baseDir, relative));
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
-        {
-            return null;
-        }
-    }
+    /// <summary>Reads a file the readout names (psd_table) relative to its folder, within <see cref="InputFile.PsdTableLimit"/>.</summary>
+    public static byte[]? ReadRelative(string baseDir, string relative, out string? problem) =>
+        InputFile.TryRead(Path.Combine(baseDir, relative), "spectrum table", InputFile.PsdTableLimit, out _, out problem);
 }

@@ -27,6 +27,7 @@ internal static class DesignJson
             Readout(w, r);
             Samples(w, r);
             Schemes(w, r);
+            RegretJson.Write(w, r);
             FixedPointJson.Write(w, r);
             w.WriteStartArray("warnings");
             foreach (var d in r.Warnings)
@@ -139,7 +140,7 @@ internal static class DesignJson
 
     private static void Schemes(Utf8JsonWriter w, DesignResult r)
     {
-        var optimal = r.Predictions[^1].SigmaV;
+        var optimal = r.Predictions.First(p => p.Scheme == WeightScheme.Optimal).SigmaV;
         w.WriteString("optimal_solver", r.OptimalSolver);
         w.WriteStartArray("schemes");
         for (var i = 0; i < r.Predictions.Count; i++)

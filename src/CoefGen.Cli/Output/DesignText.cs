@@ -15,6 +15,7 @@ internal static class DesignText
         sb.Append($"{d.Name}  ({d.SourcePath}, sha256 {d.ContentSha256[..12]})\n\n");
         DescribeReadout(sb, d, r);
         NoiseTable(sb, r);
+        RegretText.Append(sb, r);
         Budget(sb, r);
         CycleText.AppendSignalLevels(sb, r);
         CycleText.AppendTwoStage(sb, r);
@@ -84,7 +85,7 @@ internal static class DesignText
 
     private static void NoiseTable(StringBuilder sb, DesignResult r)
     {
-        var optimal = r.Predictions[^1].SigmaV;
+        var optimal = r.Predictions.First(p => p.Scheme == WeightScheme.Optimal).SigmaV;
         var table = new TextTable("scheme", "V rms", "ADU rms", "e- rms", "vs optimal", "time vs freq");
         for (var i = 0; i < r.Predictions.Count; i++)
         {
@@ -120,6 +121,7 @@ internal static class DesignText
     {
         WeightScheme.Boxcar => "boxcar",
         WeightScheme.Weighted => "weighted",
+        WeightScheme.Robust => "robust",
         _ => "optimal",
     };
 

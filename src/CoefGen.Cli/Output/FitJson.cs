@@ -29,8 +29,8 @@ internal static class FitJson
             w.WriteNumber("white_nv_per_rthz", f.WhiteNvPerRtHz);
             w.WriteNumber("white_nv_per_rthz_sigma", f.WhiteNvPerRtHzSigma);
             w.WriteNumber("flicker_corner_hz", f.Model.FlickerCornerHz);
-            w.WriteNumber("flicker_corner_hz_sigma", f.FlickerCornerSigmaHz);
-            w.WriteNumber("pole_hz", f.Model.PoleHz);
+            NumberOrNull(w, "flicker_corner_hz_sigma", f.FlickerCornerSigmaHz);
+            NumberOrNull(w, "pole_hz", f.Model.PoleHz);
             if (f.PoleSigmaHz is double ps)
             {
                 w.WriteNumber("pole_hz_sigma", ps);
@@ -38,6 +38,17 @@ internal static class FitJson
             else
             {
                 w.WriteNull("pole_hz_sigma");
+            }
+
+            if (f.Unresolved.Count > 0)
+            {
+                w.WriteStartArray("unresolved");
+                foreach (var term in f.Unresolved)
+                {
+                    w.WriteStringValue(term);
+                }
+
+                w.WriteEndArray();
             }
 
             w.WriteNumber("residual_rms_ln", f.ResidualRms);
@@ -54,6 +65,7 @@ internal static class FitJson
             w.WriteEndArray();
             w.WriteEndObject();
             w.WriteString("noise_section", FittedNoiseSection.ToToml(d, a));
+            w.WriteString("scenarios_section", FittedScenarioRange.ToToml(a));
             w.WriteStartArray("validation");
             foreach (var v in a.Validation)
             {
@@ -72,5 +84,17 @@ internal static class FitJson
         }
 
         return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+    }
+
+    private static void NumberOrNull(Utf8JsonWriter w, string name, double? value)
+    {
+        if (value is double v)
+        {
+            w.WriteNumber(name, v);
+        }
+        else
+        {
+            w.WriteNull(name);
+        }
     }
 }

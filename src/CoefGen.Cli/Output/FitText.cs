@@ -19,10 +19,15 @@ internal static class FitText
         w.Append($"spectrum  Welch, Hann, 50 % overlap: {s.Segments} segments of {s.SegmentLength} ({Eng.Si(s.ResolutionHz, "Hz")} bins), {Eng.Num(s.DegreesOfFreedom)} degrees of freedom, {Eng.Num(s.Confidence * 100, 3)} % band x{Eng.Num(s.LowerV2PerHz[0] / s.PsdV2PerHz[0])}..x{Eng.Num(s.UpperV2PerHz[0] / s.PsdV2PerHz[0])}\n\n");
         w.Append("Fitted at the ADC input (1 sigma; digital floor fixed from [adc])\n");
         w.Append($"  white        {Eng.Num(f.WhiteNvPerRtHz)} +- {Eng.Num(f.WhiteNvPerRtHzSigma, 2)} nV/rtHz\n");
-        w.Append($"  1/f corner   {Eng.Si(f.Model.FlickerCornerHz, "Hz")} +- {Eng.Si(f.FlickerCornerSigmaHz, "Hz", 2)}\n");
-        w.Append(f.PoleSigmaHz is double ps
-            ? $"  pole         {Eng.Si(f.Model.PoleHz, "Hz")} +- {Eng.Si(ps, "Hz", 2)}\n"
-            : $"  pole         {Eng.Si(f.Model.PoleHz, "Hz")} (held at noise.front_end_pole_hz)\n");
+        w.Append(f.FlickerCornerSigmaHz is double fs
+            ? $"  1/f corner   {Eng.Si(f.Model.FlickerCornerHz, "Hz")} +- {Eng.Si(fs, "Hz", 2)}\n"
+            : "  1/f corner   not resolved by the spectrum (left out)\n");
+        w.Append((f.Model.PoleHz, f.PoleSigmaHz) switch
+        {
+            (double p, double ps) => $"  pole         {Eng.Si(p, "Hz")} +- {Eng.Si(ps, "Hz", 2)}\n",
+            (double p, null) => $"  pole         {Eng.Si(p, "Hz")} (held at noise.front_end_pole_hz)\n",
+            _ => "  pole         not resolved by the spectrum (left out: white up to Nyquist)\n",
+        });
         w.Append($"  floor        {Eng.Num(Math.Sqrt(f.Model.DigitalFloorV2PerHz) * 1e9)} nV/rtHz (quantisation + ADC noise)\n");
         w.Append($"  residual     {Eng.Num(f.ResidualRms)} rms in ln S (chi-square alone: {Eng.Num(f.ExpectedResidualRms)})\n");
         foreach (var line in f.Lines)
@@ -32,6 +37,8 @@ internal static class FitText
 
         w.Append("\nReady to paste into the readout file (replaces its [noise] section):\n\n");
         w.Append(FittedNoiseSection.ToToml(d, a));
+        w.Append($"\nFor weights that stay good over the fit's uncertainty (each parameter ±{Eng.NumShort(FittedScenarioRange.Sigmas)} sigma; with weights.scheme = \"robust\"):\n\n");
+        w.Append(FittedScenarioRange.ToToml(a));
         if (a.Validation.Count > 0)
         {
             var perE = d.Sensor.VoltsAtAdcPerElectron;

@@ -9,13 +9,20 @@ internal static class SweepCsv
 {
     public static string Render(SweepResult r)
     {
-        var schemes = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid)?.Schemes.Select(s => DesignText.SchemeWord(s.Scheme)).ToList() ?? [];
+        var firstValid = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid);
+        var schemes = firstValid?.Schemes.Select(s => DesignText.SchemeWord(s.Scheme)).ToList() ?? [];
+        var regret = firstValid?.Schemes.All(s => s.WorstRegret is not null) == true;
+        var perScheme = regret ? 3 : 2;
         var header = new List<string> { "point" };
         header.AddRange(r.Axes.Select(a => a.Key));
         foreach (var s in schemes)
         {
             header.Add($"{s}_noise_e_rms");
             header.Add($"{s}_noise_adu_rms");
+            if (regret)
+            {
+                header.Add($"{s}_worst_regret");
+            }
         }
 
         header.AddRange(["chosen", "safe", "gain_error_ppm", "noise_penalty_percent", "pixel_samples", "pixel_time_s", "diagnostics"]);
@@ -32,6 +39,10 @@ internal static class SweepCsv
                 {
                     cells.Add(N(s.NoiseElectrons));
                     cells.Add(N(s.NoiseAdu));
+                    if (regret)
+                    {
+                        cells.Add(s.WorstRegret is double x ? N(x) : "");
+                    }
                 }
 
                 cells.AddRange([DesignText.SchemeWord(o.Chosen), o.Safe ? "true" : "false", N(o.GainErrorPpm), N(o.NoisePenaltyPercent),
@@ -39,7 +50,7 @@ internal static class SweepCsv
             }
             else
             {
-                cells.AddRange(Enumerable.Repeat("", (2 * schemes.Count) + 6));
+                cells.AddRange(Enumerable.Repeat("", (perScheme * schemes.Count) + 6));
             }
 
             cells.Add(string.Join("; ", o.Diagnostics.Select(d => d.ToString())));

@@ -113,6 +113,10 @@ internal static class SweepJson
                 w.WriteString("label", s.Label);
                 w.WriteNumber("noise_e_rms", s.NoiseElectrons);
                 w.WriteNumber("noise_adu_rms", s.NoiseAdu);
+                if (s.WorstRegret is double regret)
+                {
+                    w.WriteNumber("worst_regret", regret);
+                }
                 w.WriteEndObject();
             }
 

@@ -8,13 +8,19 @@ internal static class SweepText
 {
     public static string Render(SweepResult r)
     {
-        var schemes = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid)?.Schemes.Select(s => s.Scheme).ToList() ?? [];
+        var firstValid = r.Points.Select(p => p.Outcome).FirstOrDefault(o => o.Valid);
+        var schemes = firstValid?.Schemes.Select(s => s.Scheme).ToList() ?? [];
+        var regret = firstValid?.Schemes.All(s => s.WorstRegret is not null) == true;
         var header = new List<string>();
         header.AddRange(r.Axes.Select(a => a.Key));
         foreach (var s in schemes)
         {
             header.Add($"{DesignText.SchemeWord(s)} e-");
             header.Add($"{DesignText.SchemeWord(s)} ADU");
+            if (regret)
+            {
+                header.Add($"{DesignText.SchemeWord(s)} worst x");
+            }
         }
 
         header.AddRange(["integer design", "gain err ppm", "penalty %"]);
@@ -37,6 +43,10 @@ internal static class SweepText
             {
                 row.Add(Eng.Num(s.NoiseElectrons, 4));
                 row.Add(Eng.Num(s.NoiseAdu, 4));
+                if (regret)
+                {
+                    row.Add(s.WorstRegret is double x ? "x" + Eng.Num(x, 5) : "");
+                }
             }
 
             row.Add($"{DesignText.SchemeWord(o.Chosen)} {(o.Safe ? "safe" : "NOT SAFE")}");

@@ -46,18 +46,24 @@ public static class CaptureAnalysis
                 ?? throw Fail(CaptureCodes.FitFailed, description.LocationOf("noise"), "the pole is to be held but the readout file gives no noise.front_end_pole_hz");
         }
 
+        var health = CaptureHealth.Check(capture, adc);
         var fit = SpectrumFitter.Fit(spectrum, adc.DigitalVarianceV2, fixedPole)
-            ?? throw Fail(CaptureCodes.FitFailed, file,
-                "white + 1/f + pole does not fit this spectrum (no finite optimum with a determined Jacobian); try --fix-pole or a longer capture");
+            ?? throw new InputException([.. health, Diagnostic.Error(CaptureCodes.FitFailed, file,
+                "not even a white level fits this spectrum (a bin of zero power, or no finite optimum); check that the capture holds live noise")]);
 
         var lowCutoff = description.Noise.Sources.Count > 0 ? description.Noise.Sources[0].LowCutoffHz : 0.01;
         var model = fit.Model;
-        var fitted = new NoiseModel(
-            [
-                ParametricNoiseComponent.White(FittedSourceName + " white", model.WhiteV2PerHz, model.PoleHz, null),
-                ParametricNoiseComponent.Flicker(FittedSourceName + " 1/f", model.WhiteV2PerHz * model.FlickerCornerHz, lowCutoff, model.PoleHz, null),
-            ],
-            adc.DigitalVarianceV2);
+        double? nyquist = model.PoleHz is null ? adc.RateHz / 2 : null;
+        var components = new List<NoiseComponent> { ParametricNoiseComponent.White(FittedSourceName + " white", model.WhiteV2PerHz, model.PoleHz, nyquist) };
+        if (model.FlickerCornerHz > 0 && lowCutoff < (nyquist ?? double.PositiveInfinity))
+        {
+            components.Add(ParametricNoiseComponent.Flicker(FittedSourceName + " 1/f", model.WhiteV2PerHz * model.FlickerCornerHz, lowCutoff, model.PoleHz, nyquist));
+        }
+
+        var fitted = new NoiseModel(components, adc.DigitalVarianceV2);
+        var unresolved = fit.Unresolved.Select(term => Diagnostic.Warning(CaptureCodes.TermNotResolved, file, term == FitTerms.PoleTerm
+            ? "the spectrum does not resolve a front-end pole (flat up to Nyquist or not determined): the fit leaves it out and its white part ends at Nyquist (bandwidth_hz = rate / 2)"
+            : "the spectrum does not resolve a 1/f term (no rise at low frequencies above the uncertainty): the fit leaves it out (flicker corner 0)"));
         var grid = SampleGrid.FromDescription(description);
         var result = new CaptureAnalysisResult
         {
@@ -69,6 +75,7 @@ public static class CaptureAnalysis
             DesignRows = [],
             HeldOutRows = [],
             Grid = grid,
+            Warnings = [.. health, .. unresolved],
         };
         return capture.Layout == CaptureLayout.Stream ? result : WithValidation(result, description, options);
     }

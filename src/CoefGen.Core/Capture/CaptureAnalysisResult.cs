@@ -1,3 +1,4 @@
+using CoefGen.Core.Diagnostics;
 using CoefGen.Core.Noise;
 using CoefGen.Core.Weights;
 
@@ -29,6 +30,9 @@ public sealed record CaptureAnalysisResult
 
     /// <summary>Boxcar, weighted, optimal from the fitted model, optimal from the capture; empty for a stream.</summary>
     public IReadOnlyList<SchemeValidation> Validation { get; init; } = [];
+
+    /// <summary>Warnings about the capture (a stuck ADC) and the fit (terms the spectrum does not resolve).</summary>
+    public IReadOnlyList<Diagnostic> Warnings { get; init; } = [];
 
     /// <summary>Grid of the readout file.</summary>
     public required SampleGrid Grid { get; init; }

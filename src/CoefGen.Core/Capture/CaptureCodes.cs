@@ -26,4 +26,10 @@ public static class CaptureCodes
 
     /// <summary>The noise model could not be fitted to the spectrum.</summary>
     public const string FitFailed = "CG5008";
+
+    /// <summary>Warning: the capture is quieter than quantisation of a live input allows (a stuck ADC).</summary>
+    public const string StuckAdc = "CG5010";
+
+    /// <summary>Warning: a term of the noise model cannot be resolved from the spectrum and is left out of the fit.</summary>
+    public const string TermNotResolved = "CG5011";
 }

@@ -18,7 +18,8 @@ public static class FittedNoiseSection
         ArgumentNullException.ThrowIfNull(analysis);
         var fit = analysis.Fit;
         var w = new StringBuilder("[noise]\n");
-        w.Append("front_end_pole_hz = ").Append(Num(fit.Model.PoleHz)).Append('\n');
+        // No resolved pole: the fitted white part ends at Nyquist, which a brick-wall limit at rate / 2 reproduces.
+        w.Append(fit.Model.PoleHz is double pole ? "front_end_pole_hz = " : "bandwidth_hz = ").Append(Num(fit.Model.PoleHz ?? (fit.Model.RateHz / 2))).Append('\n');
         if (description.Noise.CapturePath is { } capture)
         {
             w.Append("capture = \"").Append(capture.Replace("\\", "\\\\", StringComparison.Ordinal).Replace("\"", "\\\"", StringComparison.Ordinal)).Append("\"\n");
@@ -28,8 +29,11 @@ public static class FittedNoiseSection
         w.Append("name = \"").Append(CaptureAnalysis.FittedSourceName).Append("\"\n");
         w.Append("at = \"adc\"\n");
         w.Append("white_nv_per_rthz = ").Append(Num(fit.WhiteNvPerRtHz)).Append('\n');
-        w.Append("flicker_corner_hz = ").Append(Num(fit.Model.FlickerCornerHz)).Append('\n');
-        w.Append("low_cutoff_hz = ").Append(Num(analysis.LowCutoffHz)).Append('\n');
+        if (fit.Model.FlickerCornerHz > 0)
+        {
+            w.Append("flicker_corner_hz = ").Append(Num(fit.Model.FlickerCornerHz)).Append('\n');
+            w.Append("low_cutoff_hz = ").Append(Num(analysis.LowCutoffHz)).Append('\n');
+        }
         return w.ToString();
     }
 

@@ -9,7 +9,8 @@ namespace CoefGen.Core.Capture;
 /// the covariance). B sums the 1/f-times-pole term over the first <see cref="AliasTerms"/> images on each
 /// side (the images fall off as f_p²/u³, so beyond the fourth they add less than 1e-3 of the baseband term at Nyquist). D = 2 σ_d² / rate is the known digital floor.
 /// </summary>
-public sealed record SampledSpectrumModel(double WhiteV2PerHz, double FlickerCornerHz, double PoleHz, double DigitalFloorV2PerHz, double RateHz)
+/// <para>PoleHz null: no pole, the analog part is band-limited at Nyquist (no images): S = W (1 + f_c / f) + D.</para>
+public sealed record SampledSpectrumModel(double WhiteV2PerHz, double FlickerCornerHz, double? PoleHz, double DigitalFloorV2PerHz, double RateHz)
 {
     /// <summary>Images of the 1/f term summed on each side of the baseband.</summary>
     public const int AliasTerms = 4;
@@ -17,19 +18,30 @@ public sealed record SampledSpectrumModel(double WhiteV2PerHz, double FlickerCor
     public double Psd(double fHz) => (WhiteV2PerHz * (White(fHz) + (FlickerCornerHz * Flicker(fHz)))) + DigitalFloorV2PerHz;
 
     /// <summary>The analog part at f without folding (for comparison with the readout-file model).</summary>
-    public double AnalogUnfolded(double fHz) => WhiteV2PerHz * (1 + (FlickerCornerHz / fHz)) / (1 + ((fHz / PoleHz) * (fHz / PoleHz)));
+    public double AnalogUnfolded(double fHz) =>
+        PoleHz is double p ? WhiteV2PerHz * (1 + (FlickerCornerHz / fHz)) / (1 + ((fHz / p) * (fHz / p))) : WhiteV2PerHz * (1 + (FlickerCornerHz / fHz));
 
     private double White(double f)
     {
-        var rho = Math.Exp(-2 * Math.PI * PoleHz / RateHz);
+        if (PoleHz is not double poleHz)
+        {
+            return 1;
+        }
+
+        var rho = Math.Exp(-2 * Math.PI * poleHz / RateHz);
         var w = 2 * Math.PI * f / RateHz;
-        var oneMinusRho2 = -double.ExpM1(-4 * Math.PI * PoleHz / RateHz);
+        var oneMinusRho2 = -double.ExpM1(-4 * Math.PI * poleHz / RateHz);
         var denominator = ((1 - rho) * (1 - rho)) + (2 * rho * (1 - Math.Cos(w)));
-        return (2 / RateHz) * (Math.PI * PoleHz / 2) * oneMinusRho2 / denominator;
+        return (2 / RateHz) * (Math.PI * poleHz / 2) * oneMinusRho2 / denominator;
     }
 
     private double Flicker(double f)
     {
+        if (PoleHz is null)
+        {
+            return 1 / f;
+        }
+
         var s = Image(f);
         for (var k = 1; k <= AliasTerms; k++)
         {
@@ -41,7 +53,7 @@ public sealed record SampledSpectrumModel(double WhiteV2PerHz, double FlickerCor
 
     private double Image(double u)
     {
-        var x = u / PoleHz;
+        var x = u / PoleHz!.Value;
         return 1 / (u * (1 + (x * x)));
     }
 }

@@ -25,12 +25,64 @@ public static class SpectrumFitter
     private const int GuardBins = 2;
 
     /// <summary>
-    /// Fits W, f_c and (unless <paramref name="fixedPoleHz"/> is given) f_p. Returns null when no start
-    /// converges to a finite optimum (e.g. a spectrum without any 1/f rise).
+    /// Fits W, f_c and (unless <paramref name="fixedPoleHz"/> is given) f_p, and every smaller model: white +
+    /// pole, white + 1/f with no pole (white band-limited at Nyquist), white alone. A term is kept only when
+    /// leaving it out raises the residual sum (on the bins every model used) by more than
+    /// <see cref="TermSignificance"/> times the per-bin variance of the log spectrum: the smallest model within
+    /// that of the best is taken, and <see cref="SpectrumFit.Unresolved"/> names what it leaves out.
+    /// Returns null only when not even the white level fits (e.g. a record with a bin of zero power).
     /// </summary>
     public static SpectrumFit? Fit(WelchSpectrum spectrum, double digitalVarianceV2, double? fixedPoleHz)
     {
         ArgumentNullException.ThrowIfNull(spectrum);
+        var fits = FitTerms.Candidates(fixedPoleHz)
+            .Select(t => (Terms: t, Fit: FitWith(spectrum, digitalVarianceV2, t)))
+            .Where(c => c.Fit is not null && Resolved(c.Fit, c.Terms))
+            .Select(c => (c.Terms, Fit: c.Fit!))
+            .ToList();
+        if (fits.Count == 0)
+        {
+            return null;
+        }
+
+        // Compare on the bins the richest model kept (a smaller model would mask its own misfit as "lines"), in
+        // units of the log-periodogram variance of one bin (trigamma(nu/2), inflated for correlated Hann bins).
+        var richest = fits.MaxBy(c => c.Terms.ParameterCount).Fit;
+        var common = Enumerable.Range(0, spectrum.FrequencyHz.Count).Where(i => richest.UsedBins[i]).ToArray();
+        var nu = spectrum.DegreesOfFreedom;
+        var bias = SpecialFunctions.DiGamma(nu / 2) - Math.Log(nu / 2);
+        var unit = SmallLinearAlgebra.Trigamma(nu / 2) * HannBinInflation;
+        double Chi(SampledSpectrumModel m) => common.Sum(i =>
+        {
+            var r = Math.Log(spectrum.PsdV2PerHz[i]) - bias - Math.Log(m.Psd(spectrum.FrequencyHz[i]));
+            return r * r;
+        }) / unit;
+
+        var scored = fits.Select(c => (c.Terms, c.Fit, Chi: Chi(c.Fit.Model))).ToList();
+        var best = scored.Min(c => c.Chi);
+        return scored
+            .Where(c => c.Chi <= best + TermSignificance)
+            .OrderBy(c => c.Terms.ParameterCount)
+            .ThenBy(c => c.Chi)
+            .First().Fit;
+    }
+
+    /// <summary>
+    /// A term must lower the residual sum by more than this many units of one bin's log-spectrum variance:
+    /// 25 is a 5 sigma change for one parameter (chi-square with 1 degree of freedom; common practice, no source).
+    /// </summary>
+    public const double TermSignificance = 25;
+
+    /// <summary>A fitted log parameter with a larger 1-sigma (a factor e either way) is not determined by the spectrum.</summary>
+    public const double ResolvedLogSigma = 1.0;
+
+    private static bool Resolved(SpectrumFit fit, FitTerms terms) =>
+        fit.WhiteLogSigma < ResolvedLogSigma
+        && (!terms.Flicker || fit.FlickerLogSigma < ResolvedLogSigma)
+        && (!terms.FitPole || fit.PoleLogSigma < ResolvedLogSigma);
+
+    private static SpectrumFit? FitWith(WelchSpectrum spectrum, double digitalVarianceV2, FitTerms terms)
+    {
         var floor = 2 * digitalVarianceV2 / spectrum.RateHz;
         var nu = spectrum.DegreesOfFreedom;
         var bias = SpecialFunctions.DiGamma(nu / 2) - Math.Log(nu / 2);
@@ -42,19 +94,24 @@ public static class SpectrumFitter
             y[i] = Math.Log(spectrum.PsdV2PerHz[i]) - bias;
         }
 
+        if (!y.All(double.IsFinite))
+        {
+            return null; // a bin of zero power: no log-spectrum fit
+        }
+
         var used = new bool[n];
         Array.Fill(used, true);
         var lineThreshold = ChiSquared.InvCDF(nu, 1 - LineTailProbability) / nu;
         Result? best = null;
         for (var pass = 0; pass < 4; pass++)
         {
-            best = BestOfStarts(spectrum, y, used, floor, fixedPoleHz, best?.Theta);
+            best = BestOfStarts(spectrum, y, used, floor, terms, best?.Theta);
             if (best is null)
             {
                 return null;
             }
 
-            var model = ToModel(best.Theta, fixedPoleHz, floor, spectrum.RateHz);
+            var model = ToModel(best.Theta, terms, floor, spectrum.RateHz);
             var next = new bool[n];
             Array.Fill(next, true);
             for (var i = 0; i < n; i++)
@@ -76,12 +133,12 @@ public static class SpectrumFitter
             used = next;
         }
 
-        return Finish(spectrum, y, used, floor, fixedPoleHz, best!);
+        return Finish(spectrum, y, used, floor, terms, best!);
     }
 
     private sealed record Result(double[] Theta, double Rss, int Iterations);
 
-    private static Result? BestOfStarts(WelchSpectrum s, double[] y, bool[] used, double floor, double? fixedPole, double[]? previous)
+    private static Result? BestOfStarts(WelchSpectrum s, double[] y, bool[] used, double floor, FitTerms terms, double[]? previous)
     {
         var fs = s.RateHz;
         var mid = s.FrequencyHz.Select((fk, i) => (fk, i)).Where(p => p.fk >= fs / 40 && p.fk <= fs / 10 && used[p.i]).Select(p => s.PsdV2PerHz[p.i]).Order().ToArray();
@@ -91,27 +148,23 @@ public static class SpectrumFitter
         if (previous is not null)
         {
             // Later passes only drop masked bins: the previous optimum is the right start.
-            return Minimise(previous, s, y, used, floor, fixedPole);
+            return Minimise(previous, s, y, used, floor, terms);
         }
 
-        foreach (var fc in new[] { 5 * s.ResolutionHz, 100 * s.ResolutionHz })
+        double[] corners = terms.Flicker ? [5 * s.ResolutionHz, 100 * s.ResolutionHz] : [double.NaN];
+        double[] poles = terms.FitPole ? [fs / 20, fs / 4] : [double.NaN];
+        foreach (var fc in corners)
         {
-            if (fixedPole is not null)
+            foreach (var fp in poles)
             {
-                starts.Add([Math.Log(w0), Math.Log(fc)]);
-                continue;
-            }
-
-            foreach (var fp in new[] { fs / 20, fs / 4 })
-            {
-                starts.Add([Math.Log(w0), Math.Log(fc), Math.Log(fp)]);
+                starts.Add([Math.Log(w0), .. terms.Flicker ? [Math.Log(fc)] : Array.Empty<double>(), .. terms.FitPole ? [Math.Log(fp)] : Array.Empty<double>()]);
             }
         }
 
         Result? best = null;
         foreach (var start in starts)
         {
-            var r = Minimise(start, s, y, used, floor, fixedPole);
+            var r = Minimise(start, s, y, used, floor, terms);
             if (r is not null && (best is null || r.Rss < best.Rss))
             {
                 best = r;
@@ -121,11 +174,11 @@ public static class SpectrumFitter
         return best;
     }
 
-    private static Result? Minimise(double[] start, WelchSpectrum s, double[] y, bool[] used, double floor, double? fixedPole)
+    private static Result? Minimise(double[] start, WelchSpectrum s, double[] y, bool[] used, double floor, FitTerms terms)
     {
         var theta = (double[])start.Clone();
         var p = theta.Length;
-        var rss = Rss(theta, s, y, used, floor, fixedPole);
+        var rss = Rss(theta, s, y, used, floor, terms);
         if (!double.IsFinite(rss))
         {
             return null;
@@ -135,7 +188,7 @@ public static class SpectrumFitter
         var iterations = 0;
         for (; iterations < 100; iterations++)
         {
-            var (jtj, jtr) = Normal(theta, s, y, used, floor, fixedPole);
+            var (jtj, jtr) = Normal(theta, s, y, used, floor, terms);
             var improved = false;
             while (lambda < 1e12)
             {
@@ -162,7 +215,7 @@ public static class SpectrumFitter
                     }
                 }
 
-                var trialRss = Rss(trial, s, y, used, floor, fixedPole);
+                var trialRss = Rss(trial, s, y, used, floor, terms);
                 if (double.IsFinite(trialRss) && trialRss < rss)
                 {
                     var converged = rss - trialRss < 1e-9 * rss;
@@ -185,7 +238,7 @@ public static class SpectrumFitter
         return theta.All(double.IsFinite) ? new Result(theta, rss, iterations) : null;
     }
 
-    private static SpectrumFit? Finish(WelchSpectrum s, double[] y, bool[] used, double floor, double? fixedPole, Result best)
+    private static SpectrumFit? Finish(WelchSpectrum s, double[] y, bool[] used, double floor, FitTerms terms, Result best)
     {
         var p = best.Theta.Length;
         var count = used.Count(u => u);
@@ -194,7 +247,7 @@ public static class SpectrumFitter
             return null;
         }
 
-        var (jtj, _) = Normal(best.Theta, s, y, used, floor, fixedPole);
+        var (jtj, _) = Normal(best.Theta, s, y, used, floor, terms);
         var inv = SmallLinearAlgebra.Inverse(jtj);
         if (inv is null)
         {
@@ -222,20 +275,23 @@ public static class SpectrumFitter
             return null;
         }
 
-        var model = ToModel(best.Theta, fixedPole, floor, s.RateHz);
+        var model = ToModel(best.Theta, terms, floor, s.RateHz);
         var modelPsd = s.FrequencyHz.Select(model.Psd).ToArray();
         return new SpectrumFit(
             model,
             sigma[0],
-            sigma[1],
-            fixedPole is null ? sigma[2] : null,
+            terms.Flicker ? sigma[1] : null,
+            terms.FitPole ? sigma[^1] : null,
             correlation,
             modelPsd,
             used,
             FindLines(s, modelPsd, used),
             Math.Sqrt(best.Rss / count),
             Math.Sqrt(SmallLinearAlgebra.Trigamma(s.DegreesOfFreedom / 2)),
-            best.Iterations);
+            best.Iterations)
+        {
+            Unresolved = terms.Unresolved,
+        };
     }
 
     private static List<InterferenceLine> FindLines(WelchSpectrum s, double[] model, bool[] used)
@@ -275,17 +331,17 @@ public static class SpectrumFitter
         return lines;
     }
 
-    private static SampledSpectrumModel ToModel(double[] theta, double? fixedPole, double floor, double rate) =>
-        new(Math.Exp(theta[0]), Math.Exp(theta[1]), fixedPole ?? Math.Exp(theta[2]), floor, rate);
+    private static SampledSpectrumModel ToModel(double[] theta, FitTerms terms, double floor, double rate) =>
+        new(Math.Exp(theta[0]), terms.Flicker ? Math.Exp(theta[1]) : 0, terms.FitPole ? Math.Exp(theta[^1]) : terms.HeldPoleHz, floor, rate);
 
-    private static double Rss(double[] theta, WelchSpectrum s, double[] y, bool[] used, double floor, double? fixedPole)
+    private static double Rss(double[] theta, WelchSpectrum s, double[] y, bool[] used, double floor, FitTerms terms)
     {
         if (!theta.All(t => double.IsFinite(t) && Math.Abs(t) < 200))
         {
             return double.NaN;
         }
 
-        var model = ToModel(theta, fixedPole, floor, s.RateHz);
+        var model = ToModel(theta, terms, floor, s.RateHz);
         var sum = 0.0;
         for (var i = 0; i < y.Length; i++)
         {
@@ -300,11 +356,11 @@ public static class SpectrumFitter
     }
 
     /// <summary>J^T J and J^T r of the log model at theta (central differences, step 1e-6 in each log parameter).</summary>
-    private static (double[,] JtJ, double[] JtR) Normal(double[] theta, WelchSpectrum s, double[] y, bool[] used, double floor, double? fixedPole)
+    private static (double[,] JtJ, double[] JtR) Normal(double[] theta, WelchSpectrum s, double[] y, bool[] used, double floor, FitTerms terms)
     {
         const double h = 1e-6;
         var p = theta.Length;
-        var center = ToModel(theta, fixedPole, floor, s.RateHz);
+        var center = ToModel(theta, terms, floor, s.RateHz);
         var plus = new SampledSpectrumModel[p];
         var minus = new SampledSpectrumModel[p];
         for (var k = 0; k < p; k++)
@@ -313,8 +369,8 @@ public static class SpectrumFitter
             var tm = (double[])theta.Clone();
             tp[k] += h;
             tm[k] -= h;
-            plus[k] = ToModel(tp, fixedPole, floor, s.RateHz);
-            minus[k] = ToModel(tm, fixedPole, floor, s.RateHz);
+            plus[k] = ToModel(tp, terms, floor, s.RateHz);
+            minus[k] = ToModel(tm, terms, floor, s.RateHz);
         }
 
         var jtj = new double[p, p];

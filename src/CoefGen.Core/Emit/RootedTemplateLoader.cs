@@ -10,6 +10,9 @@ namespace CoefGen.Core.Emit;
 /// </summary>
 internal sealed class RootedTemplateLoader : ITemplateLoader
 {
+    /// <summary>Largest included file (the same limit the command line puts on a template it reads).</summary>
+    public const long MaxIncludeBytes = 4L << 20;
+
     private readonly string _root;
 
     public RootedTemplateLoader(string rootFolder)
@@ -44,6 +47,11 @@ internal sealed class RootedTemplateLoader : ITemplateLoader
         if (!info.Exists)
         {
             throw new IncludeRefusedException(callerSpan, $"include '{templateName}' not found in the template folder", TemplateDiagnosticCodes.TemplateNotFound);
+        }
+
+        if (info.Length > MaxIncludeBytes)
+        {
+            throw new IncludeRefusedException(callerSpan, $"include '{templateName}' refused: it is larger than {MaxIncludeBytes >> 20} MiB, the limit for a template");
         }
 
         return full;

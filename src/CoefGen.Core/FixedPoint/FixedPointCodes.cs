@@ -35,4 +35,13 @@ public static class FixedPointCodes
 
     /// <summary>A target profile's name differs from its file name, or two profiles share a name.</summary>
     public const string ProfileNameMismatch = "CG2013";
+
+    /// <summary>A weight, prediction or datapath figure of the design is not a finite number.</summary>
+    public const string NotFinite = "CG2030";
+
+    /// <summary>Warning: the quantised coefficients no longer have the shape of the real weights.</summary>
+    public const string ShapeLostInQuantisation = "CG2031";
+
+    /// <summary>No coefficient scale fits the weights into the coefficient width.</summary>
+    public const string NoCoefficientScale = "CG2032";
 }

@@ -14,7 +14,8 @@ public static class FixedPointDesigner
     public const double OutputNoiseBudget = 0.01;
 
     public static IntegerDesign Design(string name, SampleGrid grid, IReadOnlyList<double> h, SampledCovariance r, AdcSpec adc,
-        FixedPointSettings settings, int pixelSamples, SampleWindow reset, SampleWindow signal, bool rejectDrift = false)
+        FixedPointSettings settings, int pixelSamples, SampleWindow reset, SampleWindow signal, bool rejectDrift = false,
+        Func<IReadOnlyList<double>, double>? noiseVariance = null)
     {
         ArgumentNullException.ThrowIfNull(name);
         ArgumentNullException.ThrowIfNull(grid);
@@ -40,10 +41,13 @@ public static class FixedPointDesigner
         var q = Quantiser.Quantise(h, grid, r, settings.CoefBits, powerOfTwo, rejectDrift);
         var c = q.Coefficients;
 
-        var sigmaReal = Math.Sqrt(r.QuadraticForm(h)) / Math.Abs(Gain(h.Select(v => v), grid));
+        // The noise that sets the output fraction bits, the penalty and the predicted output noise: the
+        // model's, or the capture's when the design runs on a capture (the refinement above uses the model).
+        var variance = noiseVariance ?? r.QuadraticForm;
+        var sigmaReal = Math.Sqrt(variance(h)) / Math.Abs(Gain(h.Select(v => v), grid));
         var scaled = c.Select(v => Math.ScaleB(v, -q.P)).ToArray();
         var gainInt = Gain(scaled, grid);
-        var sigmaInt = Math.Sqrt(r.QuadraticForm(scaled)) / Math.Abs(gainInt);
+        var sigmaInt = Math.Sqrt(variance(scaled)) / Math.Abs(gainInt);
         var sigmaIntAdu = sigmaInt / adc.LsbV;
 
         var f = settings.OutputFracBits ?? Math.Min(RecommendedFracBits(sigmaIntAdu), settings.OutputBits - 1);

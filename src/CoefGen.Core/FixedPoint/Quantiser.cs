@@ -66,7 +66,7 @@ internal static class Quantiser
             }
         }
 
-        throw new ArgumentException("no scale fits the coefficient width");
+        throw new CoefficientWidthException($"no scale 2^P with P >= 0 keeps the largest weight ({maxAbs.ToString("G4", System.Globalization.CultureInfo.InvariantCulture)} per unit gain) within {coefBits}-bit coefficients");
     }
 
     /// <summary>Rounds at scale p and applies the largest-remainder repair per group; x receives h 2^p.</summary>

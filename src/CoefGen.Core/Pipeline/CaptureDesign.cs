@@ -11,7 +11,9 @@ namespace CoefGen.Core.Pipeline;
 /// `noise.capture` in the readout file: the covariance of the window samples comes from the capture itself
 /// (mean waveform removed, shrunk towards the parametric model, see <see cref="CaptureCovariance"/>), the
 /// optimal weights are designed on it, and every scheme's read noise is predicted on it. The integer design
-/// is redone for the new chosen weights; its refinement and noise penalty use the parametric model.
+/// is redone for the new chosen weights: its output fraction bits, noise penalty and predicted output noise use
+/// the capture covariance (only the quantiser's +-1 refinement uses the parametric model, which it needs as lag
+/// tables), and golden vectors draw their noise from the capture covariance too.
 /// </summary>
 public static class CaptureDesign
 {
@@ -24,21 +26,26 @@ public static class CaptureDesign
         var shrinkage = covariance.Shrinkage.ToString("0.000", CultureInfo.InvariantCulture);
         var source = $"capture covariance ({covariance.Pixels.ToString(CultureInfo.InvariantCulture)} cycles, shrinkage {shrinkage})";
         var optimalLabel = d.Weights.RejectDrift ? "optimal on the capture (drift rejected)" : "optimal on the capture";
-        WeightSet[] weights = [model.Weights[0], model.Weights[1], new WeightSet(WeightScheme.Optimal, optimalLabel, solution.H)];
+        WeightSet[] weights = [model.Weights[0], model.Weights[1], new WeightSet(WeightScheme.Optimal, optimalLabel, solution.H), .. model.Weights.Skip(3)];
         var predictions = weights.Select(w => Predict(w, covariance, d, source)).ToArray();
         var chosen = weights.First(w => w.Scheme == d.Weights.Scheme);
         var t = d.Timing;
-        var datapath = FixedPointDesigner.Design(
-            d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, t.Reset, t.Signal, d.Weights.RejectDrift);
-        return model with
+        var datapath = IntegerStage.Run(d, () => FixedPointDesigner.Design(
+            d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, t.Reset, t.Signal, d.Weights.RejectDrift,
+            covariance.QuadraticForm));
+        var result = model with
         {
             Weights = weights,
             Predictions = predictions,
             Datapath = datapath,
+            Regret = model.Regret?.WithWeights(weights, d.Noise, d.Sensor),
             CaptureSource = $"{capture.SourcePath}: {source}",
             OptimalSolver = "dense null-space on the capture covariance",
-            Warnings = [.. model.Warnings.Where(w => w.Code != "CG1309")],
+            CaptureCovariance = covariance,
+            Warnings = [.. model.Warnings.Where(w => w.Code != "CG1309"), .. CaptureHealth.Check(capture, d.Adc)],
         };
+        DesignFiniteness.ThrowIfNotFinite(result);
+        return result;
     }
 
     private static NoisePrediction Predict(WeightSet w, CaptureCovariance c, ReadoutDescription d, string source)

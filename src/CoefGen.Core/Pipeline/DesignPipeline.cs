@@ -45,6 +45,12 @@ public static class DesignPipeline
         var covariance = CycleNoise.WithShot(noise.Sample(grid), grid, description);
         var solver = OptimalSolverSelection.For(grid.Count, stationary: covariance.Shot is null);
         var weights = SolveWeights(description, grid, covariance, solver.Solver);
+        RegretTable? regret = null;
+        if (description.Scenarios is not null)
+        {
+            (var robust, regret) = ScenarioStage.Run(description, grid, weights, solver.Solver);
+            weights = [.. weights, robust];
+        }
 
         var span = grid.SampleIndex[^1] - grid.SampleIndex[0] + 1L;
         // Shot noise is not stationary: it has no spectrum, so the frequency-domain identity does not apply.
@@ -57,10 +63,10 @@ public static class DesignPipeline
 
         var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
         var t = description.Timing;
-        var integer = FixedPointDesigner.Design(
-            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift);
+        var integer = IntegerStage.Run(description, () => FixedPointDesigner.Design(
+            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift));
 
-        return new DesignResult
+        var result = new DesignResult
         {
             Description = description,
             Grid = grid,
@@ -71,8 +77,16 @@ public static class DesignPipeline
             OptimalSolver = solver.Name,
             FixedPointSettings = resolution.Settings,
             Datapath = integer,
-            Warnings = [.. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning), .. CaptureNotice(description)],
+            Regret = regret,
+            Warnings =
+            [
+                .. resolution.Diagnostics.Where(d => d.Severity == Severity.Warning),
+                .. CaptureNotice(description),
+                .. DesignPlausibility.Check(description, covariance, chosen.H, integer),
+            ],
         };
+        DesignFiniteness.ThrowIfNotFinite(result);
+        return result;
     }
 
     // Core does not read files: the CLI parses noise.capture and calls CaptureDesign.Apply, which drops this warning.

@@ -31,6 +31,9 @@ public sealed record ReadoutDescription
 
     public required IReadOnlyList<EmitSpec> Emit { get; init; }
 
+    /// <summary>The noise scenarios ([scenarios]), or null when the file names none.</summary>
+    public ScenarioSpec? Scenarios { get; init; }
+
     /// <summary>Source location of each key that was given, by dotted path (e.g. "fixed_point.coef_bits").</summary>
     public IReadOnlyDictionary<string, SourceLocation> KeyLocations { get; init; } = new Dictionary<string, SourceLocation>();
 

@@ -16,6 +16,17 @@ public static class ReadoutLoader
     /// <param name="readRelative">Reads a path written in the file (psd_table) relative to the readout file; null when it cannot be read.</param>
     public static LoadResult Load(byte[] content, string sourcePath, Func<string, byte[]?> readRelative)
     {
+        ArgumentNullException.ThrowIfNull(readRelative);
+        return Load(content, sourcePath, (string relative, out string? problem) =>
+        {
+            problem = null;
+            return readRelative(relative);
+        });
+    }
+
+    /// <summary>Parses and checks a readout file; <paramref name="readRelative"/> also says why a named file cannot be read.</summary>
+    public static LoadResult Load(byte[] content, string sourcePath, RelativeFileReader readRelative)
+    {
         ArgumentNullException.ThrowIfNull(content);
         ArgumentNullException.ThrowIfNull(sourcePath);
         ArgumentNullException.ThrowIfNull(readRelative);

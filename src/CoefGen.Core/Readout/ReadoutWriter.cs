@@ -19,6 +19,7 @@ public static partial class ReadoutWriter
         WriteTiming(w, description.Timing, description.Adc.RateHz);
         WriteNoise(w, description.Noise);
         WriteWeights(w, description.Weights);
+        WriteScenarios(w, description.Scenarios);
         WriteFixedPoint(w, description.FixedPoint);
         foreach (var emit in description.Emit)
         {
@@ -132,6 +133,28 @@ public static partial class ReadoutWriter
         }
 
         Line(w, "reject_drift", weights.RejectDrift ? "true" : "false");
+    }
+
+    /// <summary>Every scenario as an explicit case (ranges expanded, the nominal one written as a case without overrides).</summary>
+    private static void WriteScenarios(StringBuilder w, ScenarioSpec? scenarios)
+    {
+        if (scenarios is null)
+        {
+            return;
+        }
+
+        w.Append("\n[scenarios]\n");
+        Line(w, "objective", Str(scenarios.Objective switch { RobustObjective.Mean => "mean", RobustObjective.Regret => "regret", _ => "worst-case" }));
+        Line(w, "include_nominal", "false");
+        foreach (var scenario in scenarios.Cases)
+        {
+            w.Append("\n[[scenarios.case]]\n");
+            Line(w, "name", Str(scenario.Name));
+            foreach (var o in scenario.Overrides)
+            {
+                Line(w, Str(o.Key), Num(o.Value));
+            }
+        }
     }
 
     private static void WriteFixedPoint(StringBuilder w, FixedPointSpec fp)

@@ -11,4 +11,7 @@ public enum WeightScheme
 
     /// <summary>Minimum-variance weights for the described noise.</summary>
     Optimal,
+
+    /// <summary>Weights that stay good over the file's noise scenarios (minimax or mean, see <see cref="RobustObjective"/>).</summary>
+    Robust,
 }

@@ -70,7 +70,7 @@ public sealed class DesignPoint
         var d = result.Datapath;
         return new PointOutcome
         {
-            Schemes = [.. result.Predictions.Select(p => new SchemeNoise(p.Scheme, p.Label, p.SigmaElectrons, p.SigmaAdu))],
+            Schemes = [.. result.Predictions.Select(p => new SchemeNoise(p.Scheme, p.Label, p.SigmaElectrons, p.SigmaAdu, result.Regret?.Rows.First(row => row.Scheme == p.Scheme).WorstRatio))],
             Chosen = result.Description.Weights.Scheme,
             Safe = d.Proof.Safe,
             GainErrorPpm = d.GainErrorPpm,

@@ -10,13 +10,13 @@ namespace CoefGen.Core.Study;
 /// </summary>
 public static class DesignReport
 {
-    private static readonly string[] SchemeWords = ["boxcar", "weighted", "optimal"];
+    private static readonly string[] SchemeWords = ["boxcar", "weighted", "optimal", "robust"];
 
     public static IReadOnlyList<ReportSection> Build(DesignResult r, IReadOnlyList<EmittedFile> emitted)
     {
         ArgumentNullException.ThrowIfNull(r);
         ArgumentNullException.ThrowIfNull(emitted);
-        return [Description(r), Noise(r), Weights(r), Spectra(r), Budget(r), Proof(r), Emitted(emitted)];
+        return [Description(r), Noise(r), .. RegretReportSection.For(r), Weights(r), Spectra(r), Budget(r), Proof(r), Emitted(emitted)];
     }
 
     private static ReportCell N(string path, double v) => ReportCell.Number(path, v);
@@ -84,7 +84,7 @@ public static class DesignReport
     private static ReportSection Noise(DesignResult r)
     {
         var rows = new List<IReadOnlyList<ReportCell>> { new[] { T("scheme"), T("V rms"), T("ADU rms"), T("e- rms"), T("vs optimal"), T("chosen") } };
-        var optimal = r.Predictions[^1].SigmaV;
+        var optimal = r.Predictions.First(p => p.Scheme == WeightScheme.Optimal).SigmaV;
         for (var i = 0; i < r.Predictions.Count; i++)
         {
             var p = r.Predictions[i];

@@ -52,6 +52,29 @@ public sealed class CorrelatedNoiseSampler : IAnalogNoiseSampler
         var index = covariance.SampleIndex;
         var lag = covariance.TotalLag;
         var maxDiag = Math.Max(lag[0] + constant, double.Epsilon);
+        return Factor(n, (i, j) => lag[index[i] - index[j]] + constant, maxDiag, constant);
+    }
+
+    /// <summary>
+    /// Builds the factor from a capture covariance C (row-major N x N, V², measured codes: it already holds the
+    /// quantisation and ADC noise, which the vector generator adds again, so <paramref name="digitalVarianceV2"/>
+    /// is taken off the diagonal). C was projected onto sum h = 0, which leaves the common mode undetermined;
+    /// the largest variance is added to every entry (a common offset every weight set rejects) to make it definite.
+    /// </summary>
+    public static CorrelatedNoiseSampler FromCaptureCovariance(IReadOnlyList<double> matrix, int count, double digitalVarianceV2)
+    {
+        ArgumentNullException.ThrowIfNull(matrix);
+        if (count > MaxSamples || matrix.Count != count * count)
+        {
+            throw new ArgumentException($"need an N x N matrix with N <= {MaxSamples}");
+        }
+
+        var maxDiag = Math.Max(Enumerable.Range(0, count).Max(i => matrix[(i * count) + i]), double.Epsilon);
+        return Factor(count, (i, j) => matrix[(i * count) + j] + maxDiag - (i == j ? digitalVarianceV2 : 0.0), maxDiag, maxDiag);
+    }
+
+    private static CorrelatedNoiseSampler Factor(int n, Func<int, int, double> entry, double maxDiag, double constant)
+    {
         var loading = 0.0;
         for (var attempt = 0; ; attempt++)
         {
@@ -60,7 +83,7 @@ public sealed class CorrelatedNoiseSampler : IAnalogNoiseSampler
             {
                 for (var j = 0; j <= i; j++)
                 {
-                    a[(i * n) + j] = lag[index[i] - index[j]] + constant + (i == j ? loading : 0.0);
+                    a[(i * n) + j] = entry(i, j) + (i == j ? loading : 0.0);
                 }
             }
 

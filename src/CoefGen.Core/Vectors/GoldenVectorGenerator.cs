@@ -47,10 +47,13 @@ public static class GoldenVectorGenerator
         var baseline = adc.MinCode + (BaselineSpanFraction * span) + BaselineFractionAdu;
         var fullCharge = adc.MaxCode - baseline;
         var step = CycleStep(d);
-        // Dense Cholesky up to its limit (exact, unchanged results); above it circulant embedding of the stationary part.
-        IAnalogNoiseSampler sampler = result.Covariance.Count <= CorrelatedNoiseSampler.MaxSamples
-            ? CorrelatedNoiseSampler.Create(result.Covariance, result.Noise)
-            : CirculantNoiseSampler.Create(result.Covariance, result.Noise, d.Adc.RateHz);
+        // A capture's covariance, or the model's by dense Cholesky up to its limit (exact, unchanged results); above
+        // it circulant embedding of the stationary model covariance.
+        IAnalogNoiseSampler sampler = result.CaptureCovariance is { } measured
+            ? CorrelatedNoiseSampler.FromCaptureCovariance(measured.Matrix, measured.Count, result.Noise.DigitalVarianceV2)
+            : result.Covariance.Count <= CorrelatedNoiseSampler.MaxSamples
+                ? CorrelatedNoiseSampler.Create(result.Covariance, result.Noise)
+                : CirculantNoiseSampler.Create(result.Covariance, result.Noise, d.Adc.RateHz);
         var rng = new Xoshiro256StarStar(options.Seed);
         var shape = new CycleShape(design, adc, baseline, step);
 

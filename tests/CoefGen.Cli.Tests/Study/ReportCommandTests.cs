@@ -22,6 +22,7 @@ public partial class ReportCommandTests
     [Theory]
     [InlineData("fast_imaging.toml")]
     [InlineData("slowscan_spectro.toml")]
+    [InlineData("slowscan_robust.toml")]
     public void Every_number_in_the_report_equals_design_json(string example)
     {
         var html = Report(example, out var dir);

@@ -17,8 +17,8 @@ public sealed class SpectrumFitTests
 
         // Source of the check: the synthesis above (known parameters); tolerance 3 sigma of the fit's own uncertainty.
         AssertWithin(Math.Log(truth.WhiteV2PerHz), Math.Log(fit.Model.WhiteV2PerHz), fit.WhiteLogSigma, "ln W");
-        AssertWithin(Math.Log(truth.FlickerCornerHz), Math.Log(fit.Model.FlickerCornerHz), fit.FlickerLogSigma, "ln f_c");
-        AssertWithin(Math.Log(truth.PoleHz), Math.Log(fit.Model.PoleHz), fit.PoleLogSigma!.Value, "ln f_p");
+        AssertWithin(Math.Log(truth.FlickerCornerHz), Math.Log(fit.Model.FlickerCornerHz), fit.FlickerLogSigma!.Value, "ln f_c");
+        AssertWithin(Math.Log(truth.PoleHz), Math.Log(fit.Model.PoleHz!.Value), fit.PoleLogSigma!.Value, "ln f_p");
 
         // The uncertainties are informative, not so wide that any answer passes: e to better than 2 %, f_c and f_p to 20 %.
         Assert.True(fit.WhiteLogSigma < 0.04 && fit.FlickerLogSigma < 0.2 && fit.PoleLogSigma < 0.2,
@@ -66,6 +66,6 @@ public sealed class SpectrumFitTests
     // Quantisation LSB²/12 plus the ADC's own noise, as AdcSpec.DigitalVarianceV2.
     private static double Digital(SyntheticCapture.Model m) => m.LsbV * m.LsbV * ((1.0 / 12) + (m.AdcNoiseLsb * m.AdcNoiseLsb));
 
-    private static void AssertWithin(double expected, double actual, double sigma, string what) =>
+    internal static void AssertWithin(double expected, double actual, double sigma, string what) =>
         Assert.True(Math.Abs(actual - expected) <= 3 * sigma, $"{what}: fitted {actual}, true {expected}, sigma {sigma} ({(actual - expected) / sigma:F2} sigma)");
 }

@@ -12,6 +12,8 @@ namespace CoefGen.Core.Tests.Capture;
 ///   <see cref="SampledSpectrumModel"/>; no power below rate / N;
 /// - the ADC's own noise (Gaussian, noise_lsb) and an optional tone of random phase;
 /// quantised by rounding to codes. System.Random with a seed is deterministic across runs and platforms.
+/// PoleHz = +infinity means no pole: the white part is band-limited at Nyquist, i.e. independent samples of
+/// variance W rate / 2 (W one-sided), and the 1/f part is W f_c / f with no images.
 /// </summary>
 internal sealed class SyntheticCapture(int seed)
 {
@@ -25,8 +27,9 @@ internal sealed class SyntheticCapture(int seed)
     public double[] NoiseV(Model m, int count)
     {
         var x = new double[count];
-        var rho = Math.Exp(-2 * Math.PI * m.PoleHz / m.RateHz);
-        var sigma2 = m.WhiteV2PerHz * Math.PI * m.PoleHz / 2;
+        var noPole = double.IsPositiveInfinity(m.PoleHz);
+        var rho = noPole ? 0 : Math.Exp(-2 * Math.PI * m.PoleHz / m.RateHz);
+        var sigma2 = noPole ? m.WhiteV2PerHz * m.RateHz / 2 : m.WhiteV2PerHz * Math.PI * m.PoleHz / 2;
         var drive = Math.Sqrt(sigma2 * (1 - (rho * rho)));
         var state = Math.Sqrt(sigma2) * Gauss();
         for (var n = 0; n < count; n++)
@@ -85,8 +88,9 @@ internal sealed class SyntheticCapture(int seed)
             n *= 2;
         }
 
-        var withFlicker = new SampledSpectrumModel(m.WhiteV2PerHz, m.FlickerCornerHz, m.PoleHz, 0, m.RateHz);
-        var whiteOnly = new SampledSpectrumModel(m.WhiteV2PerHz, 0, m.PoleHz, 0, m.RateHz);
+        double? pole = double.IsPositiveInfinity(m.PoleHz) ? null : m.PoleHz;
+        var withFlicker = new SampledSpectrumModel(m.WhiteV2PerHz, m.FlickerCornerHz, pole, 0, m.RateHz);
+        var whiteOnly = new SampledSpectrumModel(m.WhiteV2PerHz, 0, pole, 0, m.RateHz);
         var re = new double[n];
         var im = new double[n];
         for (var k = 1; k < n / 2; k++)

@@ -76,8 +76,7 @@ public class RoundTripProperties
                     select new AdcSpec(rate, bits, fs, coding, noise)
         from sensor in from cg in Positive(1e-5)
                        from gain in Positive(1e-5)
-                       from sign in Gen.Elements(1.0, -1.0)
-                       select new SensorSpec(cg, sign * gain)
+                       select new SensorSpec(cg, gain)
         from timing in TimingGen
         from pole in Maybe(Positive(10))
         from bandwidth in Maybe(Positive(10))

@@ -18,7 +18,7 @@ public class ValidReadoutFileTests
 
         [sensor]
         conversion_gain_uv_per_e = "4 uV/e"
-        gain = -2.0
+        gain = 2.0
 
         [timing]
         pixel_ns = "2 us"
@@ -102,7 +102,7 @@ public class ValidReadoutFileTests
     {
         var d = LoadFull().Description!;
         Assert.Equal(new AdcSpec(20e6, 14, 2.0, AdcCoding.OffsetBinary, 0.5), d.Adc);
-        Assert.Equal(new SensorSpec(4.0, -2.0), d.Sensor);
+        Assert.Equal(new SensorSpec(4.0, 2.0), d.Sensor);
         Assert.Equal("spec_ch0", d.Name);
         Assert.Equal(ReadoutFixture.SourcePath, d.SourcePath);
     }

@@ -11,9 +11,12 @@ public static class ExampleDesigns
 {
     private static readonly ConcurrentDictionary<string, DesignResult> Cache = new();
 
-    private static readonly Lazy<TargetCatalog> Catalog = new(() => TargetCatalog.Create(
+    private static readonly Lazy<TargetCatalog> LazyCatalog = new(() => TargetCatalog.Create(
         Directory.GetFiles(Path.Combine(RepoPaths.Root, "targets"), "*.toml").Order(StringComparer.Ordinal)
             .Select(f => (Path.GetFileNameWithoutExtension(f), File.ReadAllBytes(f)))));
+
+    /// <summary>The shipped target profiles.</summary>
+    public static TargetCatalog Catalog => LazyCatalog.Value;
 
     public static string ExamplePath(string example) => Path.Combine(RepoPaths.Root, "examples", example);
 
@@ -24,7 +27,7 @@ public static class ExampleDesigns
     {
         var load = ReadoutLoader.Load(System.Text.Encoding.UTF8.GetBytes(toml), name, rel => File.ReadAllBytes(ExamplePath(rel)));
         Assert.True(load.Description is not null, string.Join("\n", load.Diagnostics));
-        return DesignPipeline.Run(load.Description!, Catalog.Value);
+        return DesignPipeline.Run(load.Description!, Catalog);
     });
 
     /// <summary>The integer design of another scheme of the same readout, on the same fixed-point settings.</summary>

@@ -20,11 +20,11 @@ internal static class AdcSectionReader
         }
 
         adc.RejectUnknown("rate_hz", "bits", "full_scale_v", "coding", "noise_lsb");
-        rateHz = adc.Quantity("rate_hz", required: true, NumberRule.Positive);
+        rateHz = adc.Quantity("rate_hz", required: true, PhysicalRange.RateHz);
         var bits = adc.Integer("bits", required: true, 2, 32);
-        var fullScale = adc.Quantity("full_scale_v", required: true, NumberRule.Positive);
+        var fullScale = adc.Quantity("full_scale_v", required: true, PhysicalRange.FullScaleV);
         var coding = adc.Choice("coding", Codings);
-        var noise = adc.Has("noise_lsb") ? adc.Quantity("noise_lsb", required: false, NumberRule.NonNegative) : 0.0;
+        var noise = adc.Has("noise_lsb") ? adc.Quantity("noise_lsb", required: false, PhysicalRange.NoiseLsb) : 0.0;
         var codingOk = !adc.Has("coding") || coding is not null;
         if (rateHz is null || bits is null || fullScale is null || noise is null || !codingOk)
         {

@@ -11,7 +11,7 @@ internal static partial class DescriptionReader
     public static ReadoutDescription? Read(TomlTable document, LoadContext context, string contentSha256)
     {
         var root = new TableReader(context, document);
-        root.RejectUnknown("name", "adc", "sensor", "timing", "integration", "noise", "weights", "fixed_point", "emit");
+        root.RejectUnknown("name", "adc", "sensor", "timing", "integration", "noise", "weights", "fixed_point", "emit", "scenarios");
         var name = ReadName(root);
         var adc = AdcSectionReader.Read(root, out var rate);
         var sensor = SensorSectionReader.Read(root, out var gain);
@@ -28,6 +28,8 @@ internal static partial class DescriptionReader
         }
 
         var weights = WeightsSectionReader.Read(root, timing);
+        var scenarios = ScenariosSectionReader.Read(root, noise);
+        RequireScenariosForRobust(root, weights, scenarios);
         var fixedPoint = FixedPointSectionReader.Read(root);
         var emit = EmitSectionReader.Read(root);
         if (context.Bag.HasErrors || name is null || adc is null || sensor is null || timing is null
@@ -49,7 +51,18 @@ internal static partial class DescriptionReader
             FixedPoint = fixedPoint,
             Emit = emit,
             KeyLocations = context.Locations,
+            Scenarios = scenarios,
         };
+    }
+
+    private static void RequireScenariosForRobust(TableReader root, WeightsSpec? weights, ScenarioSpec? scenarios)
+    {
+        if (weights?.Scheme == WeightScheme.Robust && scenarios is null && !root.Has("scenarios"))
+        {
+            var location = root.Context.Locations.GetValueOrDefault("weights.scheme", root.Context.FileOnly);
+            root.Context.Error(ReadoutCodes.RobustWithoutScenarios, location, "weights.scheme",
+                "scheme = \"robust\" needs noise scenarios to be robust over; add a [scenarios] section with [[scenarios.case]] entries or a [scenarios.range]");
+        }
     }
 
     private static string? ReadName(TableReader root)

@@ -1,7 +1,7 @@
 namespace CoefGen.Core.Readout.Loading;
 
 /// <summary>Suggests the closest allowed word for a misspelt key or value (optimal string alignment distance).</summary>
-internal static class DidYouMean
+public static class DidYouMean
 {
     /// <summary>The closest candidate within a third of the word's length (at least 1 edit), or null.</summary>
     public static string? Suggest(string given, IEnumerable<string> candidates)

@@ -5,7 +5,7 @@ namespace CoefGen.Core.Readout.Loading;
 /// <summary>State shared by the section readers while one readout file is loaded.</summary>
 internal sealed class LoadContext
 {
-    public LoadContext(string file, Func<string, byte[]?> readRelative)
+    public LoadContext(string file, RelativeFileReader readRelative)
     {
         File = file;
         ReadRelative = readRelative;
@@ -18,7 +18,7 @@ internal sealed class LoadContext
     /// <summary>Key (and table) locations by dotted path, for <see cref="ReadoutDescription.KeyLocations"/>.</summary>
     public Dictionary<string, SourceLocation> Locations { get; } = new(StringComparer.Ordinal);
 
-    public Func<string, byte[]?> ReadRelative { get; }
+    public RelativeFileReader ReadRelative { get; }
 
     /// <summary>Errors so far (warnings not counted), to tell whether a step added any.</summary>
     public int ErrorCount => Bag.Items.Count(d => d.Severity == Severity.Error);

@@ -1,4 +1,5 @@
 using System.Globalization;
+using CoefGen.Core.Diagnostics;
 
 namespace CoefGen.Core.Readout.Loading;
 
@@ -32,8 +33,8 @@ internal static class NoiseSectionReader
 
         poleGiven = noise.Has("front_end_pole_hz");
         noise.RejectUnknown("front_end_pole_hz", "bandwidth_hz", "psd_table", "psd_at", "capture", "source");
-        var pole = noise.Quantity("front_end_pole_hz", required: false, NumberRule.Positive);
-        var bandwidth = noise.Quantity("bandwidth_hz", required: false, NumberRule.Positive);
+        var pole = noise.Quantity("front_end_pole_hz", required: false, PhysicalRange.FrequencyHz);
+        var bandwidth = noise.Quantity("bandwidth_hz", required: false, PhysicalRange.FrequencyHz);
         var capture = noise.Text("capture", required: false);
         var sources = ReadSources(noise);
         var table = ReadTable(noise, gain);
@@ -53,6 +54,11 @@ internal static class NoiseSectionReader
                         $"source '{source.Name}' has a white or 1/f part but nothing limits its bandwidth, so its variance is infinite; give noise.front_end_pole_hz or noise.bandwidth_hz");
                 }
             }
+        }
+
+        if (bandwidth is double limit)
+        {
+            CheckCutoffsBelowBandwidth(noise, sources, limit);
         }
 
         return context.ErrorCount > errorsBefore
@@ -75,9 +81,9 @@ internal static class NoiseSectionReader
             }
 
             var at = source.Choice("at", References);
-            var white = source.Quantity("white_nv_per_rthz", required: true, NumberRule.NonNegative);
-            var corner = source.Has("flicker_corner_hz") ? source.Quantity("flicker_corner_hz", required: false, NumberRule.NonNegative) : 0.0;
-            var lowCutoff = source.Has("low_cutoff_hz") ? source.Quantity("low_cutoff_hz", required: false, NumberRule.Positive) : DefaultLowCutoffHz;
+            var white = source.Quantity("white_nv_per_rthz", required: true, PhysicalRange.WhiteNvPerRtHz);
+            var corner = source.Has("flicker_corner_hz") ? source.Quantity("flicker_corner_hz", required: false, PhysicalRange.CornerHz) : 0.0;
+            var lowCutoff = source.Has("low_cutoff_hz") ? source.Quantity("low_cutoff_hz", required: false, PhysicalRange.LowCutoffHz) : DefaultLowCutoffHz;
             if (name is null || white is null || corner is null || lowCutoff is null || (source.Has("at") && at is null))
             {
                 continue;
@@ -96,6 +102,16 @@ internal static class NoiseSectionReader
         return result;
     }
 
+    /// <summary>The 1/f part lives from its low cutoff to the bandwidth limit; a limit at or below the cutoff leaves nothing.</summary>
+    private static void CheckCutoffsBelowBandwidth(TableReader noise, List<(NoiseSourceSpec Source, TableReader Reader)> sources, double bandwidthHz)
+    {
+        foreach (var (source, _) in sources.Where(s => s.Source.FlickerCornerHz > 0 && s.Source.WhiteNvPerRtHz > 0 && s.Source.LowCutoffHz >= bandwidthHz))
+        {
+            noise.Context.Error(ReadoutCodes.BandwidthBelowLowCutoff, noise.Entry("bandwidth_hz")!.ValueLocation, noise.KeyPath("bandwidth_hz"),
+                $"bandwidth_hz = {Hz(bandwidthHz)} Hz is not above the 1/f low cutoff {Hz(source.LowCutoffHz)} Hz of source '{source.Name}'; allowed: a bandwidth above every low_cutoff_hz (usually the bandwidth is MHz and the cutoff about 1 / frame time)");
+        }
+    }
+
     private static PsdTable? ReadTable(TableReader noise, double? gain)
     {
         var reference = noise.Choice("psd_at", References);
@@ -108,11 +124,12 @@ internal static class NoiseSectionReader
         var context = noise.Context;
         var location = noise.Entry("psd_table")!.ValueLocation;
         var csvFile = CsvName(context.File, path);
-        var content = context.ReadRelative(path);
+        var content = context.ReadRelative(path, out var problem);
         if (content is null)
         {
+            var reason = problem is null ? "" : $": {problem}";
             context.Error(ReadoutCodes.PsdTableUnreadable, location, noise.KeyPath("psd_table"),
-                $"cannot read the spectrum table '{csvFile}'; give a CSV file relative to the readout file");
+                $"cannot read the spectrum table '{SafeText.Excerpt(csvFile, 200)}'{reason}; give a CSV file relative to the readout file");
             return null;
         }
 

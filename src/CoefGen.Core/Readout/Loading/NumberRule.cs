@@ -7,7 +7,5 @@ internal sealed record NumberRule(Func<double, bool> Accepts, string Allowed)
 
     public static readonly NumberRule NonNegative = new(v => v >= 0, "a finite number >= 0");
 
-    public static readonly NumberRule NonZero = new(v => v != 0, "a finite nonzero number");
-
     public static readonly NumberRule Any = new(_ => true, "a finite number");
 }

@@ -25,6 +25,22 @@ internal static class PsdTableReader
         var frequencies = new List<double>();
         var densities = new List<double>();
         var seenRow = false;
+        var listed = 0;
+        var unlisted = 0;
+
+        // A file that is not a table (a binary, /etc/passwd) would give one error per line: list the first few only.
+        void Report(string code, SourceLocation location, string message)
+        {
+            if (listed++ < MaxListedRows)
+            {
+                context.Error(code, location, "noise.psd_table", message);
+            }
+            else
+            {
+                unlisted++;
+            }
+        }
+
         for (var i = 0; i < lines.Length; i++)
         {
             var location = new SourceLocation(csvFile, i + 1, 1);
@@ -43,8 +59,7 @@ internal static class PsdTableReader
                     continue;
                 }
 
-                context.Error(ReadoutCodes.PsdTableBadLine, location, "noise.psd_table",
-                    $"cannot read \"{line}\"; expected two finite numbers \"frequency_hz, density_nv_per_rthz\"");
+                Report(ReadoutCodes.PsdTableBadLine, location, BadLine(fields));
                 seenRow = true;
                 continue;
             }
@@ -53,21 +68,34 @@ internal static class PsdTableReader
             if (f < 0 || (frequencies.Count > 0 && f <= frequencies[^1]))
             {
                 var previous = frequencies.Count > 0 ? $" (previous row: {ValueReader.Format(frequencies[^1])} Hz)" : "";
-                context.Error(ReadoutCodes.PsdTableNotIncreasing, location, "noise.psd_table",
+                Report(ReadoutCodes.PsdTableNotIncreasing, location,
                     $"frequency {ValueReader.Format(f)} Hz{previous}; frequencies must be >= 0 and strictly increasing");
                 continue;
             }
 
             if (nv < 0)
             {
-                context.Error(ReadoutCodes.PsdTableNegativeDensity, location, "noise.psd_table",
+                Report(ReadoutCodes.PsdTableNegativeDensity, location,
                     $"density {ValueReader.Format(nv)} nV/rtHz is negative; densities must be >= 0");
+                continue;
+            }
+
+            if (nv > PhysicalRange.MaxTableDensityNv || f > PhysicalRange.MaxTableFrequencyHz)
+            {
+                context.Error(ReadoutCodes.OutOfRange, location, "noise.psd_table",
+                    $"row {ValueReader.Format(f)} Hz, {ValueReader.Format(nv)} nV/rtHz is out of range; allowed: frequencies up to {ValueReader.Format(PhysicalRange.MaxTableFrequencyHz)} Hz, densities up to {ValueReader.Format(PhysicalRange.MaxTableDensityNv)} nV/rtHz");
                 continue;
             }
 
             var amplitude = nv * 1e-9 * densityScale;
             frequencies.Add(f);
             densities.Add(amplitude * amplitude);
+        }
+
+        if (unlisted > 0)
+        {
+            context.Error(ReadoutCodes.PsdTableBadLine, keyLocation, "noise.psd_table",
+                $"{unlisted.ToString(CultureInfo.InvariantCulture)} more bad rows in '{SafeText.Excerpt(csvFile, 200)}' not shown");
         }
 
         if (context.ErrorCount > errorsBefore)
@@ -83,6 +111,23 @@ internal static class PsdTableReader
         }
 
         return new PsdTable(name, frequencies, densities);
+    }
+
+    /// <summary>Bad rows reported one by one; the rest are counted in one diagnostic.</summary>
+    public const int MaxListedRows = 20;
+
+    /// <summary>What is wrong with a row, quoting at most one short field (never the whole line of an arbitrary file).</summary>
+    private static string BadLine(string[] fields)
+    {
+        const string expected = "expected two finite numbers \"frequency_hz, density_nv_per_rthz\"";
+        if (fields.Length != 2)
+        {
+            return $"{expected}, found {fields.Length.ToString(CultureInfo.InvariantCulture)} comma-separated field(s)";
+        }
+
+        var bad = TryNumber(fields[0], out _) ? 1 : 0;
+        var column = bad == 0 ? "frequency" : "density";
+        return $"the {column} \"{SafeText.Excerpt(fields[bad].Trim(), 24)}\" is not a finite number; {expected}";
     }
 
     private static string StripComment(string line)

@@ -33,6 +33,9 @@ internal sealed class TableReader
 
     public bool Has(string key) => _table.Find(key) is not null;
 
+    /// <summary>The keys written in this table, in file order.</summary>
+    public IReadOnlyList<string> Keys => [.. _table.Entries.Select(e => e.Key)];
+
     /// <summary>The entry of a key, recording where it was written.</summary>
     public TomlEntry? Entry(string key)
     {

@@ -66,7 +66,7 @@ internal static class TimingSectionReader
             return null;
         }
 
-        var value = timing.Quantity(key, required: true, NumberRule.NonNegative);
+        var value = timing.Quantity(key, required: true, key == "transfer_ns" ? PhysicalRange.TransferNs : PhysicalRange.TransferSample);
         return value is null
             ? null
             : new TimeQuantity(timing.KeyPath(key), timing.Entry(key)!.ValueLocation, value.Value, IsNs: key == "transfer_ns");

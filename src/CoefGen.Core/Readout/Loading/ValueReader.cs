@@ -18,24 +18,12 @@ internal static class ValueReader
         }
 
         var unit = KeyUnit.ForKey(key);
-        double value;
-        switch (entry.Value)
+        switch (QuantitySyntax.TryRead(entry.Value, unit, out var value, out var reason))
         {
-            case IntegerValueSyntax integer:
-                value = integer.Value;
-                break;
-            case FloatValueSyntax real:
-                value = real.Value;
-                break;
-            case StringValueSyntax text:
-                if (!SiQuantity.TryParse(text.Value ?? "", unit, out value, out var reason))
-                {
-                    table.Context.Error(ReadoutCodes.WrongType, entry.ValueLocation, entry.Path, reason);
-                    return null;
-                }
-
-                break;
-            default:
+            case false:
+                table.Context.Error(ReadoutCodes.WrongType, entry.ValueLocation, entry.Path, reason);
+                return null;
+            case null:
                 var example = unit.Canonical.Length == 0 ? "\"2.5\"" : $"\"2.5 k{unit.Canonical}\"";
                 table.WrongType(entry, $"a number or a string with an SI prefix such as {example}");
                 return null;

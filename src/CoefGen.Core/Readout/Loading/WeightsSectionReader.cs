@@ -6,7 +6,7 @@ namespace CoefGen.Core.Readout.Loading;
 internal static class WeightsSectionReader
 {
     private static readonly (string, WeightScheme)[] Schemes =
-        [("boxcar", WeightScheme.Boxcar), ("weighted", WeightScheme.Weighted), ("optimal", WeightScheme.Optimal)];
+        [("boxcar", WeightScheme.Boxcar), ("weighted", WeightScheme.Weighted), ("optimal", WeightScheme.Optimal), ("robust", WeightScheme.Robust)];
 
     private static readonly (string, WindowShape)[] Windows =
         [("triangle", WindowShape.Triangle), ("hann", WindowShape.Hann), ("trapezoid", WindowShape.Trapezoid), ("explicit", WindowShape.Explicit)];
@@ -31,8 +31,8 @@ internal static class WeightsSectionReader
         var window = weights.Choice("window", Windows);
         var ramp = weights.Integer("ramp_samples", required: false, 1, TimingSectionReader.MaxSamples);
         var rejectDrift = weights.Flag("reject_drift");
-        var reset = weights.NumberArray("reset", NumberRule.NonNegative);
-        var signal = weights.NumberArray("signal", NumberRule.NonNegative);
+        var reset = weights.NumberArray("reset", PhysicalRange.ShapeWeight);
+        var signal = weights.NumberArray("signal", PhysicalRange.ShapeWeight);
         if (window == WindowShape.Explicit && timing?.Cycle is not null)
         {
             context.Error(CycleCodes.TwoWindowOnly, weights.Entry("window")!.ValueLocation, weights.KeyPath("window"),
