@@ -26,6 +26,7 @@ internal static class CliApp
             VectorsCommand.Create(output, error),
             VerifyCommand.Create(output, error),
             FitCommand.Create(output, error),
+            DiffCommand.Create(output, error),
             new Option<bool>(DebugOption) { Description = "On an internal error, print the stack trace.", Recursive = true },
         };
 

@@ -22,6 +22,11 @@ internal static class CheckCommand
         cmd.SetAction(parse =>
         {
             var path = parse.GetRequiredValue(file).ToString();
+            if (InstrumentRunner.IsInstrument(path))
+            {
+                return InstrumentCommands.Check(path, parse.GetValue(outDir)?.FullName, output, error);
+            }
+
             var result = DesignRunner.TryRun(path, error);
             if (result is null)
             {
@@ -35,22 +40,7 @@ internal static class CheckCommand
             }
 
             var dir = parse.GetValue(outDir)?.FullName ?? ArtefactPlan.DefaultOutDir(path);
-            var entries = StalenessCheck.Compare(artefacts, rel =>
-            {
-                var p = Path.Combine(dir, rel);
-                // Only a regular file can be up to date (a FIFO would block the read, a folder cannot match).
-                return FileKind.Of(p) == FileKindValue.Regular ? File.ReadAllBytes(p) : null;
-            });
-            foreach (var e in entries)
-            {
-                var word = e.Status switch
-                {
-                    StalenessStatus.UpToDate => "up to date",
-                    StalenessStatus.Stale => "STALE (differs from what the readout file gives; run coefgen emit)",
-                    _ => "MISSING (run coefgen emit)",
-                };
-                output.WriteLine($"{e.RelativePath}: {word}");
-            }
+            var entries = StalenessReport.Print(artefacts, dir, "the readout file", output);
 
             return StalenessCheck.AllUpToDate(entries) ? ExitCodes.Ok : ExitCodes.Difference;
         });

@@ -23,6 +23,11 @@ internal static class DesignCommand
         };
         cmd.SetAction(parse =>
         {
+            if (InstrumentRunner.IsInstrument(parse.GetRequiredValue(file).ToString()))
+            {
+                return InstrumentCommands.Design(parse.GetRequiredValue(file).ToString(), parse.GetValue(json), output, error);
+            }
+
             var result = DesignRunner.TryRun(parse.GetRequiredValue(file).ToString(), error);
             if (result is null)
             {

@@ -29,6 +29,11 @@ internal static class EmitCommand
         cmd.SetAction(parse =>
         {
             var path = parse.GetRequiredValue(file).ToString();
+            if (InstrumentRunner.IsInstrument(path))
+            {
+                return InstrumentCommands.Emit(path, parse.GetValue(outDir)?.FullName, parse.GetValue(allowUnsafe), output, error);
+            }
+
             var result = DesignRunner.TryRun(path, error);
             if (result is null)
             {

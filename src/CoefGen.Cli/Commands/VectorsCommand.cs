@@ -34,6 +34,11 @@ internal static class VectorsCommand
                     $"{n} pixels; allowed 1..{VectorOptions.MaxPixels}")]);
             }
 
+            if (InstrumentRunner.IsInstrument(path))
+            {
+                return InstrumentCommands.Vectors(path, parse.GetRequiredValue(outDir).FullName, new VectorOptions(n, parse.GetValue(seed)), output, error);
+            }
+
             var result = DesignRunner.TryRun(path, error);
             if (result is null)
             {

@@ -61,6 +61,18 @@ internal static class ModelBuilder
         Set(g, "coefs_hex", Array(d.Coefficients.Select(c => LiteralFormat.MaskedHex(c, w))));
     }
 
+    /// <summary>The rounding, accumulator and normalize words and flags every template model carries.</summary>
+    public static void Modes(ScriptObject g, RoundingMode rounding, AccumulatorMode accumulator, NormalizeMode normalize)
+    {
+        Set(g, "rounding", ModelText.Word(rounding));
+        Set(g, "round_half_up", rounding == RoundingMode.HalfUp);
+        Set(g, "round_half_even", rounding == RoundingMode.HalfEven);
+        Set(g, "round_truncate", rounding == RoundingMode.Truncate);
+        Set(g, "accumulator", ModelText.Word(accumulator));
+        Set(g, "saturate", accumulator == AccumulatorMode.Saturate);
+        Set(g, "normalize", ModelText.Word(normalize));
+    }
+
     /// <summary>Smallest and largest value of a signed word of <paramref name="bits"/> bits.</summary>
     public static (BigInteger Min, BigInteger Max) SignedRange(int bits) =>
         (-(BigInteger.One << (bits - 1)), (BigInteger.One << (bits - 1)) - 1);

@@ -14,7 +14,7 @@ namespace CoefGen.Core.Emit;
 /// </summary>
 public sealed class TemplateModel
 {
-    private TemplateModel(ScriptObject globals, string prefix, int largestArray)
+    internal TemplateModel(ScriptObject globals, string prefix, int largestArray)
     {
         Globals = globals;
         Prefix = prefix;
@@ -97,13 +97,7 @@ public sealed class TemplateModel
         Set(g, "rounding_constant_vhdl_bits", LiteralFormat.VhdlBits(rc, rcBits));
         Set(g, "rounding_constant_fits_int32", rc <= int.MaxValue);
 
-        Set(g, "rounding", ModelText.Word(d.Rounding));
-        Set(g, "round_half_up", d.Rounding == RoundingMode.HalfUp);
-        Set(g, "round_half_even", d.Rounding == RoundingMode.HalfEven);
-        Set(g, "round_truncate", d.Rounding == RoundingMode.Truncate);
-        Set(g, "accumulator", ModelText.Word(d.Accumulator));
-        Set(g, "saturate", d.Accumulator == AccumulatorMode.Saturate);
-        Set(g, "normalize", ModelText.Word(d.Normalize));
+        Modes(g, d.Rounding, d.Accumulator, d.Normalize);
         Set(g, "coding", ModelText.Word(d.Coding));
         var offsetBinary = d.Coding == AdcCoding.OffsetBinary;
         Set(g, "offset_binary", offsetBinary);

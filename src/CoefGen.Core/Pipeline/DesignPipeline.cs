@@ -62,9 +62,7 @@ public static class DesignPipeline
             .ToArray();
 
         var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
-        var t = description.Timing;
-        var integer = IntegerStage.Run(description, () => FixedPointDesigner.Design(
-            description.Name, grid, chosen.H, covariance, description.Adc, resolution.Settings, t.PixelSamples, t.Reset, t.Signal, description.Weights.RejectDrift));
+        var integer = IntegerStage.Run(description, () => IntegerDesignOf(description, grid, chosen, covariance, resolution.Settings));
 
         var result = new DesignResult
         {
@@ -87,6 +85,24 @@ public static class DesignPipeline
         };
         DesignFiniteness.ThrowIfNotFinite(result);
         return result;
+    }
+
+    /// <summary>
+    /// The same design with its integer datapath made again for other (already validated) fixed-point settings, e.g. the
+    /// shared widths of an instrument; everything before the quantiser is kept.
+    /// </summary>
+    public static DesignResult WithSettings(DesignResult result, FixedPointSettings settings)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        ArgumentNullException.ThrowIfNull(settings);
+        var integer = IntegerStage.Run(result.Description, () => IntegerDesignOf(result.Description, result.Grid, result.Chosen, result.Covariance, settings));
+        return result with { FixedPointSettings = settings, Datapath = integer };
+    }
+
+    private static IntegerDesign IntegerDesignOf(ReadoutDescription d, SampleGrid grid, WeightSet chosen, SampledCovariance covariance, FixedPointSettings settings)
+    {
+        var t = d.Timing;
+        return FixedPointDesigner.Design(d.Name, grid, chosen.H, covariance, d.Adc, settings, t.PixelSamples, t.Reset, t.Signal, d.Weights.RejectDrift);
     }
 
     // Core does not read files: the CLI parses noise.capture and calls CaptureDesign.Apply, which drops this warning.

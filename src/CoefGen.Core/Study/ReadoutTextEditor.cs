@@ -32,6 +32,18 @@ public static class ReadoutTextEditor
             return null;
         }
 
+        return SetLiteral(text, dottedPath, Literal(value), out error);
+    }
+
+    /// <summary>
+    /// Like <see cref="SetNumber"/> with a TOML literal written as is (a number, a quoted string such as "20 MHz", a boolean);
+    /// the caller vouches that <paramref name="literal"/> is one valid TOML value.
+    /// </summary>
+    public static string? SetLiteral(string text, string dottedPath, string literal, out string? error)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        ArgumentNullException.ThrowIfNull(dottedPath);
+        ArgumentNullException.ThrowIfNull(literal);
         var document = Tomlyn.Parsing.SyntaxParser.Parse(text, "edit", true);
         if (document.HasErrors)
         {
@@ -49,7 +61,6 @@ public static class ReadoutTextEditor
         }
 
         var index = TomlIndex.Build(document);
-        var literal = Literal(value);
         if (index.Values.TryGetValue(dottedPath, out var found))
         {
             error = null;

@@ -1,0 +1,6 @@
+using CoefGen.Core.Diagnostics;
+
+namespace CoefGen.Core.Instrument;
+
+/// <summary>The instrument file when no error was found, and every diagnostic.</summary>
+public sealed record InstrumentLoadResult(InstrumentSpec? Spec, IReadOnlyList<Diagnostic> Diagnostics);
