@@ -11,15 +11,17 @@ internal static class DesignCommand
         var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML) describing one channel." };
         var json = new Option<bool>("--json") { Description = "Print one JSON document (schema coefgen.design/1, documented in the README) instead of the terminal summary." };
         var weights = new Option<bool>("--weights") { Description = "Also list every real-valued and integer weight of the chosen scheme in the terminal summary." };
+        var requireSafe = UnsafeDesign.RequireSafeOption();
         var cmd = new Command(
             "design",
             "Read a readout file, model its noise at the sample instants, derive boxcar, weighted and optimal weights, " +
             "predict their read noise (V at the ADC, ADU, e- at the sense node) with a per-source budget, and quantise " +
-            "the chosen scheme to integers with a width proof for the target. Writes nothing; exit 2 on bad input.")
+            "the chosen scheme to integers with a width proof for the target. Writes nothing; exit 2 on bad input, 1 with --require-safe when the width proof rejects the design.")
         {
             file,
             json,
             weights,
+            requireSafe,
         };
         cmd.SetAction(parse =>
         {
@@ -35,7 +37,7 @@ internal static class DesignCommand
             }
 
             output.Write(parse.GetValue(json) ? DesignJson.Render(result) : DesignText.Render(result, parse.GetValue(weights)));
-            return ExitCodes.Ok;
+            return UnsafeDesign.RequireSafe(result, parse.GetValue(requireSafe), error) ?? ExitCodes.Ok;
         });
         return cmd;
     }

@@ -13,13 +13,16 @@ internal static class ReportCommand
     {
         var file = new Argument<FileInfo>("readout") { Description = "The readout file (TOML)." };
         var outDir = new Option<DirectoryInfo>("--out", "-o") { Description = "Folder for report.html, report.md and the Markdown's charts.", Required = true };
+        var requireSafe = UnsafeDesign.RequireSafeOption();
         var cmd = new Command(
             "report",
-            "Write the design report: the description as understood, weights against time, |H(f)|^2 over the noise PSD, the noise " +
-            "budget, the fixed-point proof with margins and the emitted files with their SHA-256. report.html is self-contained " +
-            "(inline SVG, no external resources); report.md links report-chart-N.svg. Every number is the one `design --json` prints. Exit 2 on bad input.")
+            "Write the design report: a safety banner, the description and noise sources as understood, weights and step response against " +
+            "time, the noise spectrum, |H(f)|^2, where each scheme's noise comes from, the noise budget, the integer datapath and its width " +
+            "proof, the time/frequency cross-check, warnings and the emitted files with their SHA-256. report.html is self-contained " +
+            "(inline SVG, no external resources); report.md links report-chart-N.svg. Every number is the one `design --json` prints. " +
+            "Exit 2 on bad input, 1 with --require-safe when the width proof rejects the design (the report is written either way).")
         {
-            file, outDir,
+            file, outDir, requireSafe,
         };
         cmd.SetAction(parse =>
         {
@@ -47,7 +50,7 @@ internal static class ReportCommand
                 }
             }
 
-            var sections = DesignReport.Build(result, emitted);
+            var sections = DesignReport.Build(result, new ReportContext(ToolInfo.Version, emitted));
             var title = $"Design report: {result.Description.Name}";
             var charts = new List<(string Name, string Svg)>();
             var markdown = ReportMarkdown.Render(title, sections, charts);
@@ -67,7 +70,7 @@ internal static class ReportCommand
             }
 
             output.WriteLine($"wrote {Path.Combine(dir, "report.html")} and report.md with {charts.Count} charts");
-            return ExitCodes.Ok;
+            return UnsafeDesign.RequireSafe(result, parse.GetValue(requireSafe), error) ?? ExitCodes.Ok;
         });
         return cmd;
     }

@@ -133,23 +133,32 @@ internal static class SweepCommand
 
         var targetResult = target is double x ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
         var splitResult = split ? PixelSplitSearch.Run(text, baseline!, point, chosen!.Value) : null;
+        var wrote = new List<string>();
         if (sweep is not null && (csvPath is not null || plotPath is not null))
         {
             using var batch = new OutputBatch();
             if (csvPath is not null)
             {
                 AddFile(batch, csvPath, "--csv", SweepCsv.Render(sweep));
+                wrote.Add($"wrote {csvPath} ({sweep.Points.Count.ToString(CultureInfo.InvariantCulture)} points, one row each)");
             }
 
             if (plotPath is not null)
             {
                 AddFile(batch, plotPath, "--plot", SweepPlot.Render(sweep));
+                wrote.Add($"wrote {plotPath} (read noise against {sweep.Axes[0].Key})");
             }
 
             if (batch.Commit(error) is null)
             {
                 return ExitCodes.BadInput;
             }
+        }
+
+        // With --json stdout is one document, so the file notes go to stderr.
+        foreach (var line in wrote)
+        {
+            (json ? error : output).WriteLine(line);
         }
 
         if (json)

@@ -1,5 +1,7 @@
+using System.CommandLine;
 using CoefGen.Cli.Io;
 using CoefGen.Core.Diagnostics;
+using CoefGen.Core.FixedPoint;
 using CoefGen.Core.Pipeline;
 
 namespace CoefGen.Cli.Commands;
@@ -11,7 +13,7 @@ internal static class UnsafeDesign
     public static Diagnostic Describe(DesignResult r, bool asError)
     {
         var failed = r.Datapath.Proof.Checks.Where(c => c.Required && !c.Fits)
-            .Select(c => $"{c.Name.Replace('_', ' ')} needs {c.RequiredBits} bits, has {c.AvailableBits}");
+            .Select(c => $"{CheckLabel.Of(c.Name)} needs {c.RequiredBits} bits, has {c.AvailableBits}");
         var advice = r.Datapath.Proof.Advice.Count > 0 ? " Change: " + string.Join(" ", r.Datapath.Proof.Advice.Select(a => a.TrimEnd().EndsWith('.') ? a.TrimEnd() : a.TrimEnd() + ".")) : "";
         var message = $"the integer design is NOT SAFE for every input in the ADC range ({string.Join("; ", failed)}).{advice}";
         var location = r.Description.LocationOf("fixed_point");
@@ -35,5 +37,22 @@ internal static class UnsafeDesign
         }
 
         return DiagnosticPrinter.PrintFailure(error, [Describe(r, asError: true)]);
+    }
+
+    /// <summary>`--require-safe` of design and report: exit 1 after the output when the proof rejects the design.</summary>
+    public static Option<bool> RequireSafeOption() =>
+        new("--require-safe") { Description = "Exit 1 (after writing the output) when the width proof says the integer datapath can overflow." };
+
+    /// <summary>With --require-safe and an unsafe design: prints CG2020 as an error and returns 1; otherwise null.</summary>
+    public static int? RequireSafe(DesignResult r, bool required, TextWriter error)
+    {
+        if (!required || r.Datapath.Proof.Safe)
+        {
+            return null;
+        }
+
+        var d = Describe(r, asError: false);
+        DiagnosticPrinter.Print(error, [Diagnostic.Error(d.Code, d.Location, d.Message + " (--require-safe)")]);
+        return ExitCodes.Difference;
     }
 }

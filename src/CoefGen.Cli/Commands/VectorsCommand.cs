@@ -67,7 +67,8 @@ internal static class VectorsCommand
             }
 
             var set = GoldenVectorGenerator.Generate(result, new VectorOptions(n, parse.GetValue(seed)));
-            files.AddRange(VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version).Select(f => (f.Name, AtomicFile.Encode(f.Text))));
+            var alongside = files.Select(f => (f.Name, System.Text.Encoding.UTF8.GetString(f.Bytes))).ToList();
+            files.AddRange(VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version, alongside).Select(f => (f.Name, AtomicFile.Encode(f.Text))));
             var dir = parse.GetRequiredValue(outDir).FullName;
             using var batch = new OutputBatch();
             foreach (var (name, bytes) in files)

@@ -106,6 +106,7 @@ internal static class VerifyCommand
         }
 
         output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"MISMATCH in {c.Mismatches.Count} of {c.Compared} pixels"));
+        output.WriteLine("  pixels are numbered from 0 in file order: pixel k is line k + 1 of the dump and of the expected-output files");
         output.WriteLine("  pixel      expected           got  difference (LSB)");
         foreach (var m in c.Mismatches.Take(ListedMismatches))
         {

@@ -94,6 +94,19 @@ internal static class DesignJson
         }
 
         w.WriteNumber("digital_variance_v2", r.Covariance.DigitalVarianceV2);
+        w.WriteStartArray("sources");
+        foreach (var s in d.Noise.Sources)
+        {
+            w.WriteStartObject();
+            w.WriteString("name", s.Name);
+            w.WriteString("at", s.At == NoiseReference.Sensor ? "sensor" : "adc");
+            w.WriteNumber("white_nv_per_rthz", s.WhiteNvPerRtHz);
+            w.WriteNumber("flicker_corner_hz", s.FlickerCornerHz);
+            w.WriteNumber("low_cutoff_hz", s.LowCutoffHz);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
         if (r.CaptureSource is not null)
         {
             w.WriteString("capture", r.CaptureSource);

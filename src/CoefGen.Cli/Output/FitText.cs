@@ -7,7 +7,7 @@ namespace CoefGen.Cli.Output;
 /// <summary>Terminal summary of `coefgen fit`.</summary>
 internal static class FitText
 {
-    private static readonly string[] Header = ["scheme", "held-out e- rms", "95 % interval", "model e-", "design-half e-"];
+    private static readonly string[] Header = ["scheme", "held-out e- rms", "95 % interval", "fitted model e-", "design-half e-"];
 
     public static string Render(ReadoutDescription d, CaptureAnalysisResult a)
     {
@@ -54,11 +54,16 @@ internal static class FitText
                 w.Append("  ").Append(row[0].PadRight(28));
                 for (var c = 1; c < row.Length; c++)
                 {
-                    w.Append(row[c].PadLeft(c == 2 ? 16 : 15));
+                    w.Append(row[c].PadLeft(17));
                 }
 
                 w.Append('\n');
             }
+
+            var lines = f.Lines.Count == 0 ? "" :
+                $"; it leaves out the interference line{(f.Lines.Count > 1 ? "s" : "")} masked from the fit ({string.Join(", ", f.Lines.Select(l => $"{Eng.SiShort(l.FrequencyHz, "Hz")}, {Eng.SiShort(l.RmsV, "V")} rms"))}), which the held-out cycles contain";
+            w.Append($"  fitted model e-: predicted from the fitted white + 1/f + pole model alone{lines}\n");
+            w.Append("  design-half e-: predicted from the capture covariance of the design cycles, the one `design` uses with noise.capture\n");
         }
 
         return w.ToString();

@@ -16,6 +16,16 @@ internal static class ReportMarkdown
             sb.Append($"\n## {s.Title}\n");
             foreach (var b in s.Blocks)
             {
+                if (b.Banner is not null)
+                {
+                    sb.Append("\n> **").Append(b.Banner).Append("**\n");
+                }
+
+                if (b.Summary is not null)
+                {
+                    sb.Append('\n').Append(b.Summary).Append(':').Append('\n');
+                }
+
                 if (b.Paragraph is not null)
                 {
                     sb.Append('\n').Append(b.Paragraph).Append('\n');

@@ -1,4 +1,3 @@
-using System.Globalization;
 using CoefGen.Core.Study;
 
 namespace CoefGen.Cli.Output;
@@ -10,7 +9,7 @@ internal static class SweepPlot
     {
         var first = r.Axes[0];
         var series = new List<ChartSeries>();
-        var groups = r.Points.GroupBy(p => string.Join(", ", p.Values.Skip(1).Select((v, i) => $"{r.Axes[i + 1].Key}={v.ToString("G6", CultureInfo.InvariantCulture)}")));
+        var groups = r.Points.GroupBy(p => string.Join(", ", p.Values.Skip(1).Select((v, i) => $"{r.Axes[i + 1].Key} = {SweepUnits.Format(r.Axes[i + 1].Key, v)}")));
         foreach (var group in groups)
         {
             var points = group.OrderBy(p => p.Values[0]).ToList();
@@ -30,6 +29,7 @@ internal static class SweepPlot
         {
             Title = $"Read noise against {first.Key}",
             XLabel = SweepUnits.Label(first.Key),
+            XUnit = SweepUnits.TickUnit(first.Key),
             YLabel = "read noise (e- rms)",
             XLog = SvgLineChart.SpansDecade(first.Values),
             YLog = SvgLineChart.SpansDecade(ys),

@@ -12,11 +12,15 @@ internal static class SweepSearchText
         var sb = new StringBuilder();
         var scheme = DesignText.SchemeWord(r.Scheme);
         sb.Append(r.WindowCount is int n
-            ? $"target {Eng.Num(r.TargetElectrons)} e- rms ({scheme}): smallest equal windows N = {Eng.Int(n)} samples each ({Eng.Si(n / rateHz, "s")})\n"
-            : $"target {Eng.Num(r.TargetElectrons)} e- rms ({scheme}): not reached\n");
-        sb.Append("  the lead-in, the gap to the transfer, the dead time and the tail keep their lengths; the pixel cycle grows or shrinks with N\n");
-        sb.Append($"  {r.Note}\n");
-        sb.Append(Table(r.Trials, r.Scheme, t => r.WindowCount is int w && t.Layout.ResetCount == w, t => r.Outcome(t)));
+            ? $"target {Eng.NumShort(r.TargetElectrons, 6)} e- rms ({scheme}): smallest equal windows N = {Eng.Int(n)} samples each ({Eng.SiShort(n / rateHz, "s")})\n"
+            : $"target {Eng.NumShort(r.TargetElectrons, 6)} e- rms ({scheme}): not reached\n");
+        sb.Append("  each row: reset and signal windows of N samples; the rest of the pixel cycle keeps its length\n");
+        if (!r.Monotone || r.WindowCount is null)
+        {
+            sb.Append($"  {r.Note}\n");
+        }
+
+        sb.Append(Table(r.Trials, r.Scheme, t => r.WindowCount is int w && t.Layout.ResetCount == w, t => r.Outcome(t), r.TargetElectrons));
         return sb.ToString();
     }
 
@@ -31,17 +35,29 @@ internal static class SweepSearchText
 
         var b = r.Best.Layout;
         sb.Append($"split of the {Eng.Int(r.PixelSamples)}-sample pixel cycle ({Eng.Si(r.PixelSamples / rateHz, "s")}, {scheme}): " +
-                  $"reset {Eng.Int(b.ResetCount)}, dead time {b.DeadSamples.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)} ({Eng.Si(b.DeadSamples / rateHz, "s")}), signal {Eng.Int(b.SignalCount)} samples " +
+                  $"reset {Eng.Int(b.ResetCount)}, dead time {Eng.NumShort(b.DeadSamples, 6)} ({Eng.Si(b.DeadSamples / rateHz, "s")}), signal {Eng.Int(b.SignalCount)} samples " +
                   $"-> {Eng.Num(r.Best.Outcome.NoiseOf(r.Scheme))} e- rms\n");
         sb.Append($"  {r.Note}; neighbours move one sample between a window and the dead time\n");
-        sb.Append(Table([r.Best, .. r.Neighbours], r.Scheme, t => ReferenceEquals(t, r.Best), _ => ""));
+        sb.Append(Table([r.Best, .. r.Neighbours], r.Scheme, t => ReferenceEquals(t, r.Best), _ => "", null));
         return sb.ToString();
     }
 
     private static string Outcome(this TargetNoiseResult r, WindowTrial t) =>
         t.Outcome.Valid ? (t.Outcome.NoiseOf(r.Scheme) <= r.TargetElectrons ? "meets" : "above") : "";
 
-    private static string Table(IEnumerable<WindowTrial> trials, WeightScheme scheme, Func<WindowTrial, bool> mark, Func<WindowTrial, string> verdict)
+    /// <summary>The noise with 4 figures, or with as many more as it takes to differ from the target it is compared with.</summary>
+    private static string Against(double noise, double? target)
+    {
+        var digits = 4;
+        while (target is double t && noise != t && Eng.Num(noise, digits) == Eng.Num(t, digits) && digits < 12)
+        {
+            digits++;
+        }
+
+        return Eng.Num(noise, digits);
+    }
+
+    private static string Table(IEnumerable<WindowTrial> trials, WeightScheme scheme, Func<WindowTrial, bool> mark, Func<WindowTrial, string> verdict, double? target)
     {
         var table = new TextTable("", "reset", "dead", "signal", "pixel", "pixel time", "e- rms", "ADU rms", "integer design", "");
         foreach (var t in trials)
@@ -51,14 +67,14 @@ internal static class SweepSearchText
             if (!o.Valid)
             {
                 var d = o.Diagnostics.Count > 0 ? o.Diagnostics[0] : null;
-                table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), l.DeadSamples.ToString("G6", System.Globalization.CultureInfo.InvariantCulture), Eng.Int(l.SignalCount), Eng.Int(l.PixelSamples), "", "", "",
+                table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), Eng.NumShort(l.DeadSamples, 6), Eng.Int(l.SignalCount), Eng.Int(l.PixelSamples), "", "", "",
                     "invalid: " + (d is null ? "" : $"{d.Code} {d.Message}"), "");
                 continue;
             }
 
             var s = o.Schemes.First(x => x.Scheme == scheme);
-            table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), l.DeadSamples.ToString("G6", System.Globalization.CultureInfo.InvariantCulture), Eng.Int(l.SignalCount), Eng.Int(o.PixelSamples),
-                Eng.Si(o.PixelTimeS, "s"), Eng.Num(s.NoiseElectrons), Eng.Num(s.NoiseAdu), o.Safe ? "safe" : "NOT SAFE", verdict(t));
+            table.Add(mark(t) ? ">" : "", Eng.Int(l.ResetCount), Eng.NumShort(l.DeadSamples, 6), Eng.Int(l.SignalCount), Eng.Int(o.PixelSamples),
+                Eng.Si(o.PixelTimeS, "s"), Against(s.NoiseElectrons, target), Eng.Num(s.NoiseAdu), o.Safe ? "safe" : "NOT SAFE", verdict(t));
         }
 
         return table.Render();

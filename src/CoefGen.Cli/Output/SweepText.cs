@@ -28,13 +28,18 @@ internal static class SweepText
         var problems = new StringBuilder();
         foreach (var p in r.Points)
         {
-            var row = p.Values.Select(v => v.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)).ToList();
+            var row = p.Values.Select((v, i) => SweepUnits.Format(r.Axes[i].Key, v)).ToList();
             var o = p.Outcome;
             if (!o.Valid)
             {
                 var first = o.Diagnostics.Count > 0 ? o.Diagnostics[0] : null;
-                row.Add("invalid: " + (first is null ? "no design" : $"{first.Code} {first.Message}"));
-                problems.Append($"  point {Eng.Int(p.Index)}: {string.Join("; ", o.Diagnostics.Select(d => d.ToString()))}\n");
+                // The row names the code only; the full diagnostic is listed once below the table.
+                row.Add("invalid: " + (first is null ? "no design" : $"{first.Code} (point {Eng.Int(p.Index)})"));
+                problems.Append($"  point {Eng.Int(p.Index)} ({string.Join(", ", p.Values.Select((v, i) => $"{r.Axes[i].Key} = {SweepUnits.Format(r.Axes[i].Key, v)}"))}):\n");
+                foreach (var d in o.Diagnostics)
+                {
+                    problems.Append($"    {d}\n");
+                }
                 table.Add([.. row]);
                 continue;
             }
@@ -61,7 +66,7 @@ internal static class SweepText
         sb.Append(table.Render());
         if (problems.Length > 0)
         {
-            sb.Append("\ninvalid points:\n").Append(problems);
+            sb.Append("\ninvalid points (numbered from 0 in sweep order):\n").Append(problems);
         }
 
         return sb.ToString();

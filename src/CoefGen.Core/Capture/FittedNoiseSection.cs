@@ -19,7 +19,7 @@ public static class FittedNoiseSection
         var fit = analysis.Fit;
         var w = new StringBuilder("[noise]\n");
         // No resolved pole: the fitted white part ends at Nyquist, which a brick-wall limit at rate / 2 reproduces.
-        w.Append(fit.Model.PoleHz is double pole ? "front_end_pole_hz = " : "bandwidth_hz = ").Append(Num(fit.Model.PoleHz ?? (fit.Model.RateHz / 2))).Append('\n');
+        w.Append(fit.Model.PoleHz is double pole ? "front_end_pole_hz = " : "bandwidth_hz = ").Append(Hz(fit.Model.PoleHz ?? (fit.Model.RateHz / 2))).Append('\n');
         if (description.Noise.CapturePath is { } capture)
         {
             w.Append("capture = \"").Append(capture.Replace("\\", "\\\\", StringComparison.Ordinal).Replace("\"", "\\\"", StringComparison.Ordinal)).Append("\"\n");
@@ -31,11 +31,14 @@ public static class FittedNoiseSection
         w.Append("white_nv_per_rthz = ").Append(Num(fit.WhiteNvPerRtHz)).Append('\n');
         if (fit.Model.FlickerCornerHz > 0)
         {
-            w.Append("flicker_corner_hz = ").Append(Num(fit.Model.FlickerCornerHz)).Append('\n');
-            w.Append("low_cutoff_hz = ").Append(Num(analysis.LowCutoffHz)).Append('\n');
+            w.Append("flicker_corner_hz = ").Append(Hz(fit.Model.FlickerCornerHz)).Append('\n');
+            w.Append("low_cutoff_hz = ").Append(Hz(analysis.LowCutoffHz)).Append('\n');
         }
         return w.ToString();
     }
+
+    /// <summary>A frequency in the readout style, an SI string such as "1.51 MHz" (the loader reads it back).</summary>
+    private static string Hz(double v) => "\"" + Formatting.Human.SiShort(v, "Hz") + "\"";
 
     private static string Num(double v)
     {

@@ -38,8 +38,12 @@ public static class FittedScenarioRange
     private static void Interval(StringBuilder w, string key, double estimate, double logSigma)
     {
         var half = Sigmas * (double.IsFinite(logSigma) && logSigma > 0 ? logSigma : 0);
-        w.Append('"').Append(key).Append("\" = [").Append(Num(estimate * Math.Exp(-half))).Append(", ").Append(Num(estimate * Math.Exp(half))).Append("]\n");
+        w.Append('"').Append(key).Append("\" = [").Append(Value(key, estimate * Math.Exp(-half))).Append(", ").Append(Value(key, estimate * Math.Exp(half))).Append("]\n");
     }
+
+    /// <summary>Frequencies as SI strings in the readout style ("39.88 kHz", read back by the loader), other values as numbers.</summary>
+    private static string Value(string key, double v) =>
+        key.EndsWith("_hz", StringComparison.Ordinal) ? "\"" + Formatting.Human.SiShort(v, "Hz") + "\"" : Num(v);
 
     private static string Num(double v)
     {

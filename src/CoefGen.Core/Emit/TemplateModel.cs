@@ -50,8 +50,9 @@ public sealed class TemplateModel
         Set(g, "readout_file", ModelText.CommentSafe(provenance.ReadoutFileName));
         Set(g, "readout_sha256", ModelText.CommentSafe(provenance.ReadoutSha256));
         Set(g, "scheme", ModelText.CommentSafe(provenance.SchemeLabel));
-        Set(g, "noise_e", LiteralFormat.RoundTrip(provenance.PredictedReadNoiseElectrons));
-        Set(g, "noise_adu", LiteralFormat.RoundTrip(provenance.PredictedReadNoiseAdu));
+        // Comments show people 4 significant figures: a last-digit difference between machines must not change a file.
+        Set(g, "noise_e", Formatting.Human.NumShort(provenance.PredictedReadNoiseElectrons));
+        Set(g, "noise_adu", Formatting.Human.NumShort(provenance.PredictedReadNoiseAdu));
 
         Set(g, "pixel_samples", d.PixelSamples);
         Set(g, "reset_start", d.Reset.Start);

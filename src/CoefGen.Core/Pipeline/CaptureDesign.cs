@@ -40,12 +40,20 @@ public static class CaptureDesign
             Datapath = datapath,
             Regret = model.Regret?.WithWeights(weights, d.Noise, d.Sensor),
             CaptureSource = $"{capture.SourcePath}: {source}",
+            CaptureSpectrum = CaptureSpectrum(capture, d),
             OptimalSolver = "dense null-space on the capture covariance",
             CaptureCovariance = covariance,
             Warnings = [.. model.Warnings.Where(w => w.Code != "CG1309"), .. CaptureHealth.Check(capture, d.Adc)],
         };
         DesignFiniteness.ThrowIfNotFinite(result);
         return result;
+    }
+
+    private static WelchSpectrum? CaptureSpectrum(SampleCapture capture, ReadoutDescription d)
+    {
+        var record = CaptureSamples.ResidualStream(capture, d.Adc.LsbV);
+        var segment = WelchEstimator.DefaultSegmentLength(record.Length);
+        return segment * 2 <= record.Length ? WelchEstimator.Estimate(record, d.Adc.RateHz, segment) : null;
     }
 
     private static NoisePrediction Predict(WeightSet w, CaptureCovariance c, ReadoutDescription d, string source)

@@ -36,6 +36,9 @@ public sealed record DesignResult
     /// <summary>When the noise comes from a capture (noise.capture): the file and how its covariance was formed; null otherwise.</summary>
     public string? CaptureSource { get; init; }
 
+    /// <summary>The Welch spectrum of the capture's residual stream when the design uses noise.capture (shown in the report).</summary>
+    public Capture.WelchSpectrum? CaptureSpectrum { get; init; }
+
     /// <summary>Every scheme's read noise in every noise scenario ([scenarios]), or null when the file names none.</summary>
     public RegretTable? Regret { get; init; }
 

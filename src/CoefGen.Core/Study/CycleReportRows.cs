@@ -12,11 +12,11 @@ internal static class CycleReportRows
 
     public static IEnumerable<IReadOnlyList<ReportCell>> Rows(CycleSpec cycle)
     {
-        yield return [ReportCell.Of("reset groups"), ReportCell.Number("readout.timing.cycle.group_count", cycle.GroupCount), ReportCell.Of("")];
-        yield return [ReportCell.Of("repeated reads"), ReportCell.Number("readout.timing.cycle.repeat_count", cycle.RepeatCount), ReportCell.Of("")];
+        yield return [ReportCell.Of("reset groups"), ReportCell.Number("readout.timing.cycle.group_count", cycle.GroupCount)];
+        yield return [ReportCell.Of("repeated reads"), ReportCell.Number("readout.timing.cycle.repeat_count", cycle.RepeatCount)];
         if (cycle.ReferenceTimeS is double reference)
         {
-            yield return [ReportCell.Of("ramp reference time"), ReportCell.Number("readout.timing.cycle.reference_time_s", reference), ReportCell.Of("s")];
+            yield return [ReportCell.Of("ramp reference time"), ReportCell.Si("readout.timing.cycle.reference_time_s", reference, "s")];
         }
 
         var windows = cycle.Windows;
@@ -26,7 +26,7 @@ internal static class CycleReportRows
             {
                 if (i == ListedEach)
                 {
-                    yield return [ReportCell.Of(string.Create(CultureInfo.InvariantCulture, $"... {windows.Count - (2 * ListedEach)} more windows")), ReportCell.Of(""), ReportCell.Of("")];
+                    yield return [ReportCell.Of(string.Create(CultureInfo.InvariantCulture, $"... {windows.Count - (2 * ListedEach)} more windows")), ReportCell.Of("")];
                 }
 
                 continue;
@@ -41,8 +41,8 @@ internal static class CycleReportRows
                 _ => "integrating ramp",
             };
             var label = string.Create(CultureInfo.InvariantCulture, $"window '{w.Name}' ({sees}, reset group {w.ResetGroup})");
-            yield return [ReportCell.Of(label + " start"), ReportCell.Number(path + ".start", w.Samples.Start), ReportCell.Of("sample")];
-            yield return [ReportCell.Of(label + " length"), ReportCell.Number(path + ".count", w.Samples.Count), ReportCell.Of("samples")];
+            yield return [ReportCell.Of(label + " start"), ReportCell.With(path + ".start", w.Samples.Start, "(sample index)")];
+            yield return [ReportCell.Of(label + " length"), ReportCell.With(path + ".count", w.Samples.Count, "samples")];
         }
     }
 

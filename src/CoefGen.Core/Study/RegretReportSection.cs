@@ -63,13 +63,17 @@ public static class RegretReportSection
         }
 
         var xLog = t.VariedKey is not null && x[0] > 0 && x[^1] >= 10 * x[0] * (1 - 1e-9);
+        var xUnit = t.VariedKey?.EndsWith("_hz", StringComparison.Ordinal) == true ? "Hz" : null;
         var ratioChart = new SvgLineChart
         {
             Title = "Ratio to each scenario's own optimum (regret)",
             XLabel = xLabel,
             YLabel = "read noise / own optimum",
             XLog = xLog,
-            Series = [.. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.Ratio[i])]))],
+            XUnit = xUnit,
+            XMin = xLog ? x[0] : null,
+            XMax = xLog ? x[^1] : null,
+            Series = [.. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.Ratio[i])], Style: ChartPalette.Scheme(row.Scheme)))],
         }.Render();
         var chart = new SvgLineChart
         {
@@ -77,10 +81,13 @@ public static class RegretReportSection
             XLabel = xLabel,
             YLabel = "read noise (e- rms)",
             XLog = xLog,
+            XUnit = xUnit,
+            XMin = xLog ? x[0] : null,
+            XMax = xLog ? x[^1] : null,
             Series =
             [
-                .. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.SigmaElectrons[i])])),
-                new ChartSeries("own optimum of each scenario", x, [.. order.Select(i => t.OptimumElectrons[i])]), // last: scheme colours match the ratio chart
+                .. t.Rows.Select(row => new ChartSeries(row.Label, x, [.. order.Select(i => row.SigmaElectrons[i])], Style: ChartPalette.Scheme(row.Scheme))),
+                new ChartSeries("own optimum of each scenario", x, [.. order.Select(i => t.OptimumElectrons[i])], Style: ChartPalette.Reference),
             ],
         }.Render();
         var robust = t.Robust;
@@ -103,5 +110,5 @@ public static class RegretReportSection
 
     private static string I(int v) => v.ToString(CultureInfo.InvariantCulture);
 
-    private static string F(double v) => v.ToString("G3", CultureInfo.InvariantCulture);
+    private static string F(double v) => Formatting.Human.NumShort(v, 3);
 }

@@ -3,34 +3,46 @@ using static CoefGen.Core.Study.SvgFormat;
 
 namespace CoefGen.Core.Study;
 
-/// <summary>Horizontal bars with a label and a value caption each, as a self-contained SVG element.</summary>
+/// <summary>Horizontal bars with a label and a value caption each, as a self-contained SVG element; long labels wrap.</summary>
 public sealed class SvgBarChart
 {
     public required string Title { get; init; }
 
-    /// <summary>Label, bar length (any unit, >= 0) and the caption printed after the bar.</summary>
-    public required IReadOnlyList<(string Label, double Value, string Caption)> Bars { get; init; }
+    public string? Description { get; init; }
 
-    public double Width { get; init; } = 760;
+    public required IReadOnlyList<ChartBar> Bars { get; init; }
+
+    public double Width { get; init; } = 860;
 
     public string Render()
     {
-        const double left = 200, row = 24, top = 34;
-        var height = top + (row * Bars.Count) + 16;
+        const double top = 34, line = 15;
+        var labelChars = Math.Min((int)(Width * 0.4 / CharWidth), Math.Max(8, Bars.Max(b => (int?)b.Label.Length) ?? 8));
+        var left = 16 + (CharWidth * labelChars);
+        var captionRoom = 16 + (CharWidth * Math.Max(8, Bars.Max(b => (int?)b.Caption.Length) ?? 8));
+        var labels = Bars.Select(b => Wrap(b.Label, labelChars)).ToList();
+        var rows = labels.Select(l => Math.Max(24, (line * l.Count) + 9)).ToList();
+        var height = top + rows.Sum() + 12;
         var max = Bars.Count == 0 ? 1 : Math.Max(Bars.Max(b => b.Value), double.Epsilon);
-        var span = Width - left - 150;
+        var span = Width - left - captionRoom;
         var sb = new StringBuilder();
-        sb.Append($"<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"{C(Width)}\" height=\"{C(height)}\" viewBox=\"0 0 {C(Width)} {C(height)}\" font-family=\"sans-serif\" font-size=\"12\">\n");
-        sb.Append($"<rect width=\"{C(Width)}\" height=\"{C(height)}\" fill=\"#ffffff\"/>\n");
-        sb.Append($"<text x=\"{C(Width / 2)}\" y=\"20\" text-anchor=\"middle\" font-size=\"14\">{Esc(Title)}</text>\n");
+        SvgOpen(sb, Width, height, Title, Description ?? $"Bars: {string.Join("; ", Bars.Select(b => $"{b.Label} {b.Caption}"))}.");
+        sb.Append($"<text x=\"{C(Width / 2)}\" y=\"20\" text-anchor=\"middle\" font-size=\"14\" font-weight=\"bold\">{Esc(Title)}</text>\n");
+        var y = top;
         for (var i = 0; i < Bars.Count; i++)
         {
-            var (label, value, caption) = Bars[i];
-            var y = top + (row * i);
-            var w = Math.Max(0, span * value / max);
-            sb.Append($"<text x=\"{C(left - 8)}\" y=\"{C(y + 15)}\" text-anchor=\"end\">{Esc(label)}</text>\n");
-            sb.Append($"<rect x=\"{C(left)}\" y=\"{C(y + 3)}\" width=\"{C(w)}\" height=\"{C(row - 6)}\" fill=\"{Palette[i % Palette.Length]}\"/>\n");
-            sb.Append($"<text x=\"{C(left + w + 6)}\" y=\"{C(y + 15)}\">{Esc(caption)}</text>\n");
+            var b = Bars[i];
+            var w = Math.Max(0, span * b.Value / max);
+            var mid = y + (rows[i] / 2);
+            for (var k = 0; k < labels[i].Count; k++)
+            {
+                var ty = mid + 4 + (line * (k - ((labels[i].Count - 1) / 2.0)));
+                sb.Append($"<text x=\"{C(left - 8)}\" y=\"{C(ty)}\" text-anchor=\"end\">{Esc(labels[i][k])}</text>\n");
+            }
+
+            sb.Append($"<rect x=\"{C(left)}\" y=\"{C(mid - 9)}\" width=\"{C(w)}\" height=\"18\" fill=\"{b.Style.Colour}\"><title>{Esc(b.Label + ": " + b.Caption)}</title></rect>\n");
+            sb.Append($"<text x=\"{C(left + w + 6)}\" y=\"{C(mid + 4)}\">{Esc(b.Caption)}</text>\n");
+            y += rows[i];
         }
 
         sb.Append("</svg>\n");

@@ -104,6 +104,14 @@ public sealed record SweepAxis(string Key, IReadOnlyList<double> Values)
                 return null;
             }
 
+            if (stop > start && step > stop - start)
+            {
+                // 4:10:30 read as START:STOP:STEP is the single value 4; most likely START:STEP:STOP was meant.
+                error = $"'{body}': a range is START:STOP:STEP, and STEP {parts[2].Trim()} is larger than STOP - START, which gives the single value {parts[0].Trim()}; " +
+                        $"for START:STEP:STOP write {parts[0].Trim()}:{parts[2].Trim()}:{parts[1].Trim()}, for one value write {parts[0].Trim()}";
+                return null;
+            }
+
             for (var i = 0; values.Count <= MaxValues; i++)
             {
                 var v = start + (i * step);

@@ -17,8 +17,11 @@ public static class VectorFiles
 
     private static readonly UTF8Encoding Utf8 = new(encoderShouldEmitUTF8Identifier: false);
 
-    /// <summary>All files, the manifest last (it carries the SHA-256 of the others).</summary>
-    public static IReadOnlyList<(string Name, string Text)> Render(GoldenVectorSet set, string toolName, string toolVersion)
+    /// <summary>
+    /// All files, the manifest last (it carries the SHA-256 of the others and of <paramref name="alongside"/>, the files
+    /// written into the same folder with the vectors, such as the reference datapath and testbenches).
+    /// </summary>
+    public static IReadOnlyList<(string Name, string Text)> Render(GoldenVectorSet set, string toolName, string toolVersion, IReadOnlyList<(string Name, string Text)>? alongside = null)
     {
         ArgumentNullException.ThrowIfNull(set);
         ArgumentNullException.ThrowIfNull(toolName);
@@ -33,7 +36,7 @@ public static class VectorFiles
             (VectorFileNames.ExpectedDecimal, Lines(set.Pixels, p => Dec(p.Expected.Output) + " " + Dec(p.Expected.Accumulator))),
             (VectorFileNames.Table, Table(set)),
         };
-        files.Add((VectorFileNames.Manifest, Manifest(set, files, toolName, toolVersion)));
+        files.Add((VectorFileNames.Manifest, Manifest(set, [.. alongside ?? [], .. files], toolName, toolVersion)));
         return files;
     }
 

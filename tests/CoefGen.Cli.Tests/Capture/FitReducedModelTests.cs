@@ -29,7 +29,7 @@ public sealed class FitReducedModelTests
         Assert.Equal(0, text.ExitCode);
         Assert.Contains("1/f corner   not resolved", text.Output);
         Assert.Contains("pole         not resolved", text.Output);
-        Assert.Contains("bandwidth_hz = 5E+06", text.Output);
+        Assert.Contains("bandwidth_hz = \"5 MHz\"", text.Output);
         Assert.Equal(2, text.Error.Split('\n').Count(l => l.Contains("warning CG5011", StringComparison.Ordinal)));
 
         var json = CliRunner.Run("fit", white, "--readout", Readout, "--json");

@@ -86,7 +86,7 @@ public class EmitCheckCommandTests
 
 public class UnsafeDesignTests
 {
-    private static string UnsafeCopy()
+    internal static string UnsafeCopy()
     {
         var dir = RepoPaths.TempDir();
         // An 8-bit output cannot hold the +-2^13 ADU range of a 14-bit ADC: the width proof says NOT SAFE.

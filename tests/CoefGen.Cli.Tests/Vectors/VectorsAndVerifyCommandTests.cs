@@ -67,6 +67,7 @@ public class VectorsAndVerifyCommandTests
         Assert.Equal(1, r.ExitCode);
         Assert.Contains("MISMATCH in 1 of 60 pixels", r.Output, StringComparison.Ordinal);
         Assert.Matches($@"\s17\s+{expected}\s+{expected + 1}\s+\+1", r.Output);
+        Assert.Contains("numbered from 0", r.Output, StringComparison.Ordinal); // line 18 of the dump is pixel 17
     }
 
     [Fact]

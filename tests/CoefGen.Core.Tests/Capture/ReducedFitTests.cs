@@ -70,7 +70,7 @@ public sealed class ReducedFitTests
         var analysis = CaptureAnalysis.Run(CaptureFixtures.Bench, CaptureFixtures.Pixels(codes), new CaptureAnalysisOptions());
         Assert.Equal(2, analysis.Warnings.Count(w => w.Code == CaptureCodes.TermNotResolved));
         var section = FittedNoiseSection.ToToml(CaptureFixtures.Bench, analysis);
-        Assert.Contains("bandwidth_hz = 5E+06", section, StringComparison.Ordinal);
+        Assert.Contains("bandwidth_hz = \"5 MHz\"", section, StringComparison.Ordinal);
         Assert.DoesNotContain("flicker_corner_hz", section, StringComparison.Ordinal);
         Assert.NotEmpty(analysis.Validation);
     }

@@ -9,7 +9,7 @@ public class DeterminismTests
     [Fact]
     public void Builtin_outputs_are_byte_identical_under_a_German_style_culture()
     {
-        var model = TemplateModel.Create(TestDesigns.Fixed() with { GainErrorPpm = -1.5e-3 }, TestDesigns.Provenance with { PredictedReadNoiseElectrons = 1234.5 });
+        var model = TemplateModel.Create(TestDesigns.Fixed() with { GainErrorPpm = -1.5e-3 }, TestDesigns.Provenance with { PredictedReadNoiseElectrons = 12.345678 });
         var invariant = BuiltinTemplates.All.Select(t => BuiltinRender.Render(model, t.Name)).ToList();
         var saved = CultureInfo.CurrentCulture;
         try
@@ -29,7 +29,7 @@ public class DeterminismTests
         }
 
         Assert.All(invariant, s => Assert.DoesNotContain("\r", s, StringComparison.Ordinal));
-        Assert.Contains("1234.5 e- rms", invariant[0], StringComparison.Ordinal);
+        Assert.Contains("12.35 e- rms", invariant[0], StringComparison.Ordinal);
     }
 
     [Fact]
