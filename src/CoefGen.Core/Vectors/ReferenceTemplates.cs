@@ -20,6 +20,8 @@ public static class ReferenceTemplates
         ("ref-tb.c.scriban", "_tb.c"),
         ("ref-pipeline.v.scriban", "_pipeline.v"),
         ("ref-pipeline-tb.v.scriban", "_pipeline_tb.v"),
+        ("ref-pipeline.vhd.scriban", "_pipeline.vhd"),
+        ("ref-pipeline-tb.vhd.scriban", "_pipeline_tb.vhd"),
         ("ref-coefs.hex.scriban", "_coefs.hex"),
     ];
 }

@@ -4,16 +4,19 @@ using CoefGen.Core.Tests.Vectors;
 namespace CoefGen.Core.Tests.Toolchain;
 
 /// <summary>
-/// The pipelined datapath (ref-pipeline.v) against the same golden vectors as the clear one, in Icarus, with in_valid
+/// The pipelined datapath (ref-pipeline.v / .vhd) against the same golden vectors as the clear one, in Icarus on
+/// 300 pixels and GHDL on the first 50 (numeric_std is slow there), with in_valid
 /// and out_ready each low on 25 % of clocks (deterministic seed): zero mismatches on offset binary + saturate +
 /// half-even (fast imaging), two's complement + wrap + half-up (slowscan), the 64-bit accumulator of ir_measured,
 /// and a post-multiplier with truncation; the clear datapath runs on the same files, so both give the same outputs.
 /// The bench also checks out_last every 7th result, the documented latency with no stalls, and clear_flags.
-/// Negative controls: a corrupted coefficient and a corrupted expected value fail. Verilator -Wall lints it clean.
+/// Negative controls: a corrupted coefficient and a corrupted expected value fail. Verilator -Wall lints it clean;
+/// GHDL analyses it with -Werror.
 /// </summary>
 public class PipelineDatapathToolchainTests
 {
     private const int Pixels = 300;
+    private const int GhdlPixels = 50;
 
     public static TheoryData<string> Examples => ["fast_imaging.toml", "slowscan_spectro.toml", "ir_measured.toml"];
 
@@ -30,6 +33,9 @@ public class PipelineDatapathToolchainTests
         Assert.Contains("FLAGS acc_clip=0 out_sat=0", stalled.StdOut, StringComparison.Ordinal);
         ReferenceBench.AssertPass(Icarus(dir, prefix, "+stall=0"), Pixels);
         AssertLintClean(dir, prefix);
+        var ghdl = Ghdl(dir, prefix, GhdlPixels);
+        ReferenceBench.AssertPass(ghdl, GhdlPixels);
+        Assert.Contains("FLAGS acc_clip=0 out_sat=0", ghdl.StdOut, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -44,6 +50,7 @@ public class PipelineDatapathToolchainTests
         ReferenceBench.AssertPass(Icarus(dir, prefix, "+seed=7"), Pixels);
         ReferenceBench.AssertPass(Icarus(dir, prefix, "+seed=7", coefHex: true), Pixels);
         AssertLintClean(dir, prefix);
+        ReferenceBench.AssertPass(Ghdl(dir, prefix, 30, "-gCOEF_HEX=true"), 30);
     }
 
     /// <summary>An output a few ADU wide and an accumulator below its proven width: both sticky flags set (and cleared).</summary>
@@ -56,6 +63,9 @@ public class PipelineDatapathToolchainTests
         var run = Icarus(dir, prefix);
         ReferenceBench.AssertPass(run, Pixels);
         Assert.Contains("FLAGS acc_clip=1 out_sat=1", run.StdOut, StringComparison.Ordinal);
+        var ghdl = Ghdl(dir, prefix, GhdlPixels);
+        ReferenceBench.AssertPass(ghdl, GhdlPixels);
+        Assert.Contains("FLAGS acc_clip=1 out_sat=1", ghdl.StdOut, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -69,6 +79,7 @@ public class PipelineDatapathToolchainTests
             var prefix = ReferenceBench.Write(dir, r, 40, r.Datapath with { Coefficients = coefs });
             ReferenceBench.AssertFail(Icarus(dir, prefix));
             ReferenceBench.AssertFail(Icarus(dir, prefix, coefHex: true));
+            ReferenceBench.AssertFail(Ghdl(dir, prefix, 40));
         }
 
         using (var dir = new TempDir())
@@ -91,6 +102,15 @@ public class PipelineDatapathToolchainTests
         ToolRunner.RunOk(iverilog, dir.Path, Emitted.Timeout, "-g2005-sv", "-I", ".", "-o", "pipe.vvp",
             $"-P{prefix}_pipeline_tb.COEF_HEX={(coefHex ? 1 : 0)}", prefix + "_pipeline.v", prefix + "_pipeline_tb.v");
         return ToolRunner.Run(vvp, dir.Path, Emitted.Timeout, "-n", "pipe.vvp", plusArg);
+    }
+
+    private static ToolResult Ghdl(TempDir dir, string prefix, int pixels, string generic = "-gSTALL_PERCENT=25")
+    {
+        var ghdl = Tools.Require("ghdl");
+        Directory.CreateDirectory(Path.Combine(dir.Path, "work"));
+        ToolRunner.RunOk(ghdl, dir.Path, Emitted.Timeout, "-a", "--std=08", "-Werror", "--workdir=work",
+            prefix + "_coefs_pkg.vhd", prefix + "_pipeline.vhd", prefix + "_pipeline_tb.vhd");
+        return ToolRunner.Run(ghdl, dir.Path, Emitted.Timeout, "-r", "--std=08", "--workdir=work", prefix + "_pipeline_tb", $"-gMAX_PIXELS={pixels}", generic);
     }
 
     private static void AssertLintClean(TempDir dir, string prefix)
