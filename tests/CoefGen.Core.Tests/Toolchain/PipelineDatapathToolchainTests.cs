@@ -69,7 +69,7 @@ public class PipelineDatapathToolchainTests
     }
 
     [Fact]
-    public void A_corrupted_coefficient_or_expected_value_fails_the_pipelined_bench()
+    public void A_corrupted_coefficient_expected_value_or_hex_image_fails_the_pipelined_bench()
     {
         var r = ExampleDesigns.Load("slowscan_spectro.toml");
         var coefs = r.Datapath.Coefficients.ToArray();
@@ -91,6 +91,20 @@ public class PipelineDatapathToolchainTests
             lines[17] = word.ToString("x" + lines[17].Length, System.Globalization.CultureInfo.InvariantCulture);
             File.WriteAllLines(file, lines);
             ReferenceBench.AssertFail(Icarus(dir, prefix));
+        }
+
+        // Only the hex image corrupted: the benches that load it fail, the one reading the include passes.
+        using (var dir = new TempDir())
+        {
+            var prefix = ReferenceBench.Write(dir, r, 40);
+            var file = Path.Combine(dir.Path, prefix + "_coefs.hex");
+            var lines = File.ReadAllLines(file);
+            Assert.Equal(r.Datapath.Coefficients.Count, lines.Length);
+            lines[0] = (Convert.ToUInt64(lines[0], 16) ^ 1).ToString("x" + lines[0].Length, System.Globalization.CultureInfo.InvariantCulture);
+            File.WriteAllLines(file, lines);
+            ReferenceBench.AssertPass(Icarus(dir, prefix), 40);
+            ReferenceBench.AssertFail(Icarus(dir, prefix, coefHex: true));
+            ReferenceBench.AssertFail(Ghdl(dir, prefix, 40, "-gCOEF_HEX=true"));
         }
     }
 
