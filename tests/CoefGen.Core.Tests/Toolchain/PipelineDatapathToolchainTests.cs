@@ -41,10 +41,7 @@ public class PipelineDatapathToolchainTests
     [Fact]
     public void Post_multiplier_and_truncation_match_with_stalls_and_from_the_hex_image()
     {
-        var toml = File.ReadAllText(ExampleDesigns.ExamplePath("fast_imaging.toml"))
-            .Replace("rounding = \"half-even\"", "rounding = \"truncate\"\nnormalize = \"exact\"", StringComparison.Ordinal);
-        var r = ExampleDesigns.FromText(toml, "fast_exact.toml");
-        Assert.True(r.Datapath.PostMultiplierBits > 0);
+        var r = PostMultiplierExample.FastExactTruncate();
         using var dir = new TempDir();
         var prefix = ReferenceBench.Write(dir, r, Pixels);
         ReferenceBench.AssertPass(Icarus(dir, prefix, "+seed=7"), Pixels);
