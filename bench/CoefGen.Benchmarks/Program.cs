@@ -13,6 +13,7 @@ using CoefGen.Core.Weights.Structured;
 //   precond [n...]     iterations and time per preconditioner
 //   crossover [n...]   Stopwatch dense vs structured at small sizes (for OptimalSolverChoice)
 //   peak n             one structured solve of 2 x n in this process: time, iterations, allocated bytes, peak working set
+//   twostage [N m n]   Stopwatch: the two-stage design of N reads x 2 x m (default 1000 x 2 x 64); dense vs two-stage at n reads
 //   design             BenchmarkDotNet: the whole DesignPipeline.Run of each shipped example and of a 2x4096 readout
 MathNet.Numerics.Control.UseManaged();
 var mode = args.Length > 0 ? args[0] : "bench";
@@ -107,8 +108,13 @@ switch (mode)
             break;
         }
 
+    case "twostage":
+        // Two-stage design of N repeated reads (default 1000 reads x 2 x 64), then dense vs two-stage at 16 reads.
+        TwoStageScale.Run(sizes.Length > 0 ? sizes[0] : 1000, sizes.Length > 1 ? sizes[1] : 64, sizes.Length > 2 ? sizes[2] : 16);
+        break;
+
     default:
-        Console.Error.WriteLine("modes: bench | design | precond [n...] | crossover [n...] | peak n");
+        Console.Error.WriteLine("modes: bench | design | precond [n...] | crossover [n...] | peak n | twostage [reads perWindow compareReads]");
         return 2;
 }
 

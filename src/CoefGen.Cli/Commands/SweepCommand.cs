@@ -94,7 +94,8 @@ internal static class SweepCommand
         if (target is not null || split)
         {
             var baseResult = DesignRunner.TryRun(path, error);
-            if (baseResult is null)
+            // The window searches resize one reset and one signal window; a general cycle is swept by its keys (--vary).
+            if (baseResult is null || CycleRefusal.Refuse(baseResult.Description, "--target-noise-e and --split-pixel-time", error))
             {
                 return ExitCodes.BadInput;
             }

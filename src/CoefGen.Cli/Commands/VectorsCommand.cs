@@ -51,12 +51,6 @@ internal static class VectorsCommand
                 DiagnosticPrinter.Print(error, [UnsafeDesign.Describe(result, asError: false)]);
             }
 
-            if (result.Datapath.Coefficients.Count > CorrelatedNoiseSampler.MaxSamples)
-            {
-                return DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(VectorCodes.TooManySamples, SourceLocation.FileOnly(path),
-                    $"{result.Datapath.Coefficients.Count} weighted samples; the vector generator handles up to {CorrelatedNoiseSampler.MaxSamples}")]);
-            }
-
             var files = new List<(string Name, byte[] Bytes)>();
             if (!parse.GetValue(noRtl))
             {
@@ -104,6 +98,11 @@ internal static class VectorsCommand
             if (batch.Commit(error) is null)
             {
                 return ExitCodes.BadInput;
+            }
+
+            if (source.SamplerNote is string note)
+            {
+                DiagnosticPrinter.Print(error, [Diagnostic.Warning(VectorCodes.EmbeddingClipped, SourceLocation.FileOnly(path), note)]);
             }
 
             var kinds = source.UnreachedBranches.Count;

@@ -76,6 +76,11 @@ internal static class DesignJson
         }
 
         w.WriteEndArray();
+        if (t.Cycle is not null)
+        {
+            CycleJson.Write(w, t.Cycle);
+        }
+
         w.WriteEndObject();
         w.WriteStartObject("noise");
         if (d.Noise.FrontEndPoleHz is double fp)
@@ -139,6 +144,10 @@ internal static class DesignJson
         Numbers(w, "index", g.SampleIndex.Select(i => (double)i), integers: true);
         Numbers(w, "time_s", g.TimeS);
         Numbers(w, "step", g.Step);
+        if (g.IsCycle)
+        {
+            Numbers(w, "group", g.Group.Select(x => (double)x), integers: true);
+        }
         w.WriteEndObject();
     }
 

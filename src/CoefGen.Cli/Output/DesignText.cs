@@ -17,6 +17,8 @@ internal static class DesignText
         NoiseTable(sb, r);
         RegretText.Append(sb, r);
         Budget(sb, r);
+        CycleText.AppendSignalLevels(sb, r);
+        CycleText.AppendTwoStage(sb, r);
         FixedPointText.Append(sb, r);
         WeightsText.Append(sb, r, allWeights);
         return sb.ToString();
@@ -29,9 +31,17 @@ internal static class DesignText
         sb.Append("Readout\n");
         sb.Append($"  ADC       {a.Bits} bits at {Eng.SiShort(a.RateHz, "S/s")}, {Eng.NumShort(a.FullScaleV)} V span (LSB {Eng.SiShort(a.LsbV, "V")}), {CodingWord(a.Coding)}, own noise {Eng.NumShort(a.NoiseLsb)} LSB rms\n");
         sb.Append($"  sensor    {Eng.NumShort(d.Sensor.ConversionGainUvPerE)} uV/e- x gain {Eng.NumShort(d.Sensor.Gain)} = {Eng.SiShort(d.Sensor.VoltsAtAdcPerElectron, "V")}/e- at the ADC\n");
-        sb.Append($"  cycle     {t.PixelSamples} samples ({Eng.SiShort(t.PixelSamples / a.RateHz, "s")}), transfer at {Eng.SiShort(t.TransferTimeS, "s")}, step {StepWord(d)}\n");
-        sb.Append($"  reset     samples {t.Reset.Start}..{t.Reset.End - 1} ({t.Reset.Count}, {Eng.SiShort(t.Reset.Count / a.RateHz, "s")})\n");
-        sb.Append($"  signal    samples {t.Signal.Start}..{t.Signal.End - 1} ({t.Signal.Count}, {Eng.SiShort(t.Signal.Count / a.RateHz, "s")})\n");
+        if (t.Cycle is not null)
+        {
+            CycleText.AppendWindows(sb, d, t.Cycle);
+        }
+        else
+        {
+            sb.Append($"  cycle     {t.PixelSamples} samples ({Eng.SiShort(t.PixelSamples / a.RateHz, "s")}), transfer at {Eng.SiShort(t.TransferTimeS, "s")}, step {StepWord(d)}\n");
+            sb.Append($"  reset     samples {t.Reset.Start}..{t.Reset.End - 1} ({t.Reset.Count}, {Eng.SiShort(t.Reset.Count / a.RateHz, "s")})\n");
+            sb.Append($"  signal    samples {t.Signal.Start}..{t.Signal.End - 1} ({t.Signal.Count}, {Eng.SiShort(t.Signal.Count / a.RateHz, "s")})\n");
+        }
+
         foreach (var line in t.Rounding)
         {
             sb.Append($"  rounding  {line}\n");

@@ -16,7 +16,8 @@ internal static class WeightsText
         sb.Append($"Weights of {r.Chosen.Label} (h: real, unit gain to charge; c: integer, h ~ c / 2^{r.Datapath.P})\n");
         var table = new TextTable("sample", "t", "s", "h", "c");
         void Row(int k) => table.Add(Eng.Int(g.SampleIndex[k]), Eng.Si(g.TimeS[k], "s"), Eng.Num(g.Step[k], 6), Eng.Num(h[k], 6), Eng.Int(c[k]));
-        foreach (var (start, count) in new[] { (0, g.ResetCount), (g.ResetCount, g.SignalCount) })
+        var runs = g.IsCycle ? CycleRuns(g, all) : [(0, g.ResetCount), (g.ResetCount, g.SignalCount)];
+        foreach (var (start, count) in runs)
         {
             for (var k = start; k < start + count; k++)
             {
@@ -40,5 +41,12 @@ internal static class WeightsText
         {
             sb.Append("  (--weights lists every weight; --json carries all of them for scripts)\n");
         }
+    }
+
+    /// <summary>The windows of a general cycle as runs of grid entries; in brief, the first and last two windows only.</summary>
+    private static (int Start, int Count)[] CycleRuns(CoefGen.Core.Weights.SampleGrid g, bool all)
+    {
+        var runs = g.Windows.Select(w => (w.First, w.Count)).ToArray();
+        return all || runs.Length <= 4 ? runs : [.. runs[..2], .. runs[^2..]];
     }
 }

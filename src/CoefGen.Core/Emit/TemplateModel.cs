@@ -62,6 +62,7 @@ public sealed class TemplateModel
         Set(g, "coef_count", d.Coefficients.Count);
         Set(g, "sample_index", Array(d.SampleIndex));
         Set(g, "last_index", d.Coefficients.Count - 1);
+        CycleModel.Add(g, d);
 
         var wideC = d.CoefBits > 32;
         Coefficients(g, d, wideC);
@@ -144,7 +145,8 @@ public sealed class TemplateModel
     private static void Validate(IntegerDesign d)
     {
         var n = d.Coefficients.Count;
-        if (n == 0 || d.SampleIndex.Count != n || d.Reset.Count + d.Signal.Count != n)
+        var windowed = d.Windows is null ? d.Reset.Count + d.Signal.Count : d.Windows.Sum(w => w.Count);
+        if (n == 0 || d.SampleIndex.Count != n || windowed != n)
         {
             throw new ArgumentException("coefficients, sample indices and window counts disagree", nameof(d));
         }

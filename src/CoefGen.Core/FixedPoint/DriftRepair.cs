@@ -17,7 +17,7 @@ internal static class DriftRepair
     {
         var n = grid.SampleIndex;
         var all = Enumerable.Range(0, c.Length).ToArray();
-        int[][] groups = windowsPinned ? [all[..grid.ResetCount], all[grid.ResetCount..]] : [all];
+        int[][] groups = grid.IsCycle ? grid.GroupMembers() : windowsPinned ? [all[..grid.ResetCount], all[grid.ResetCount..]] : [all];
         var maxMoves = (4 * c.Length) + 100;
         for (var move = 0; move < maxMoves; move++)
         {

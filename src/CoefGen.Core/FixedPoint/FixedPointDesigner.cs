@@ -25,7 +25,7 @@ public static class FixedPointDesigner
         ArgumentNullException.ThrowIfNull(settings);
         ArgumentNullException.ThrowIfNull(reset);
         ArgumentNullException.ThrowIfNull(signal);
-        if (grid.ResetCount != reset.Count || grid.SignalCount != signal.Count || grid.SampleIndex[^1] >= pixelSamples)
+        if ((!grid.IsCycle && (grid.ResetCount != reset.Count || grid.SignalCount != signal.Count)) || grid.SampleIndex[^1] >= pixelSamples)
         {
             throw new ArgumentException("grid, windows and pixel cycle disagree");
         }
@@ -96,6 +96,9 @@ public static class FixedPointDesigner
             GainErrorPpm = gainErrorPpm,
             NoisePenaltyPercent = 100 * ((sigmaInt / sigmaReal) - 1),
             PredictedNoiseOutputLsb = Math.Sqrt((outSigma * outSigma) + (1.0 / 12)),
+            Windows = grid.IsCycle ? grid.Windows : null,
+            GroupCount = grid.GroupCount,
+            ReadCount = grid.Windows.Max(w => w.Read) + 1,
         };
     }
 

@@ -75,6 +75,18 @@ public sealed record IntegerDesign
     /// <summary>Predicted read noise at the output in output LSB (including output rounding), for reports.</summary>
     public required double PredictedNoiseOutputLsb { get; init; }
 
+    /// <summary>
+    /// The windows of a general cycle as runs of coefficients, in time order; null for a classic two-window design
+    /// (then <see cref="Reset"/> and <see cref="Signal"/> are its windows; for a general cycle they are the first and last).
+    /// </summary>
+    public IReadOnlyList<CoefGen.Core.Weights.GridWindow>? Windows { get; init; }
+
+    /// <summary>Reset groups (1 for a classic design).</summary>
+    public int GroupCount { get; init; } = 1;
+
+    /// <summary>Copies of the repeated windows (1 when nothing repeats).</summary>
+    public int ReadCount { get; init; } = 1;
+
     /// <summary>Rounding constant added before the shift for HalfUp (2^(Shift-1)), 0 otherwise.</summary>
     public long RoundingConstant => Rounding == RoundingMode.HalfUp && Shift > 0 ? 1L << (Shift - 1) : 0L;
 }

@@ -76,7 +76,15 @@ internal static class Quantiser
         var xs = hn.Select(v => v * scale).ToArray();
         var c = xs.Select(v => (long)Math.Round(v, MidpointRounding.ToEven)).ToArray();
         var all = Enumerable.Range(0, c.Length).ToArray();
-        if (powerOfTwoGain)
+        if (grid.IsCycle)
+        {
+            // A general cycle: sum c = 0 over every reset group; the gain is realised (and reported) as it rounds.
+            foreach (var group in grid.GroupMembers())
+            {
+                FixSum(c, xs, group, 0);
+            }
+        }
+        else if (powerOfTwoGain)
         {
             var reset = all[..grid.ResetCount];
             var signal = all[grid.ResetCount..];
@@ -133,7 +141,7 @@ internal static class Quantiser
         }
 
         var all = Enumerable.Range(0, n).ToArray();
-        int[][] windows = powerOfTwoGain ? [all[..grid.ResetCount], all[grid.ResetCount..]] : [all];
+        int[][] windows = grid.IsCycle ? grid.GroupMembers() : powerOfTwoGain ? [all[..grid.ResetCount], all[grid.ResetCount..]] : [all];
         var state = new RefinementState(c, grid.Step, r);
         var cap = (4 * n) + 100;
         var moves = 0;

@@ -36,6 +36,20 @@ public sealed class SampledCovariance
 
     public IReadOnlyList<CovarianceComponent> Components { get; }
 
+    /// <summary>
+    /// Shot noise of an integrating charge (ramp windows), or null. It is not stationary, so it is not in the lag
+    /// tables, <see cref="At"/> or the components: <see cref="QuadraticForm(IReadOnlyList{double})"/> and
+    /// <see cref="FullAt"/> include it; the stationary-only consumers (structured solver, vector sampler) must not
+    /// be used when it is present.
+    /// </summary>
+    public ShotNoiseCovariance? Shot { get; private init; }
+
+    /// <summary>The same covariance with a shot-noise term (replacing any).</summary>
+    public SampledCovariance WithShot(ShotNoiseCovariance? shot) => new(_index, Components, DigitalVarianceV2) { Shot = shot };
+
+    /// <summary>Entry R_ij including the digital diagonal and the shot term.</summary>
+    public double FullAt(int i, int j) => At(i, j) + (Shot?.At(i, j) ?? 0.0);
+
     /// <summary>White digital variance per sample in V^2 (quantisation + ADC noise).</summary>
     public double DigitalVarianceV2 { get; }
 
@@ -66,7 +80,7 @@ public sealed class SampledCovariance
     }
 
     /// <summary>h^T R h with the digital diagonal.</summary>
-    public double QuadraticForm(IReadOnlyList<double> h) => QuadraticForm(h, TotalLag) + DigitalPart(h);
+    public double QuadraticForm(IReadOnlyList<double> h) => QuadraticForm(h, TotalLag) + DigitalPart(h) + (Shot?.QuadraticForm(h) ?? 0.0);
 
     /// <summary>h^T C_c h for every analog component, in order, from one pass over the weights.</summary>
     public double[] ComponentQuadraticForms(IReadOnlyList<double> h)

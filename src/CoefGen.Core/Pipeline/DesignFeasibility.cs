@@ -16,6 +16,12 @@ internal static class DesignFeasibility
     public static IReadOnlyList<Diagnostic> Check(ReadoutDescription d, SampleGrid grid)
     {
         var bag = new DiagnosticBag();
+        if (grid.IsCycle)
+        {
+            CycleFeasibility.Check(d, grid, bag);
+            return bag.Items;
+        }
+
         var meanReset = 0.0;
         var meanSignal = 0.0;
         for (var i = 0; i < grid.Count; i++)

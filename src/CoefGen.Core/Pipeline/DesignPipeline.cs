@@ -42,8 +42,8 @@ public static class DesignPipeline
         }
 
         var noise = NoiseModel.FromDescription(description);
-        var covariance = noise.Sample(grid);
-        var solver = OptimalSolverSelection.For(grid.Count);
+        var covariance = CycleNoise.WithShot(noise.Sample(grid), grid, description);
+        var solver = OptimalSolverSelection.For(grid.Count, stationary: covariance.Shot is null);
         var weights = SolveWeights(description, grid, covariance, solver.Solver);
         RegretTable? regret = null;
         if (description.Scenarios is not null)
@@ -53,7 +53,8 @@ public static class DesignPipeline
         }
 
         var span = grid.SampleIndex[^1] - grid.SampleIndex[0] + 1L;
-        Func<IReadOnlyList<double>, double>? frequencyDomain = frequencyCheck && grid.Count * span <= FrequencyCheckLimit
+        // Shot noise is not stationary: it has no spectrum, so the frequency-domain identity does not apply.
+        Func<IReadOnlyList<double>, double>? frequencyDomain = frequencyCheck && covariance.Shot is null && grid.Count * span <= FrequencyCheckLimit
             ? h => FrequencyDomainVariance.ComputeByComponent(noise, grid, h).Sum()
             : null;
         var predictions = weights

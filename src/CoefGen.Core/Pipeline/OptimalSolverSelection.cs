@@ -9,8 +9,12 @@ namespace CoefGen.Core.Pipeline;
 /// </summary>
 public sealed record OptimalSolverSelection(IOptimalSolver Solver, string Name)
 {
-    public static OptimalSolverSelection For(int count) =>
-        OptimalSolverChoice.PreferStructured(count)
+    /// <param name="count">Weighted samples.</param>
+    /// <param name="stationary">False when the covariance has a non-stationary part (shot noise of an integrating
+    /// charge): the structured solver's Toeplitz products and circulant preconditioner assume stationarity, so the
+    /// dense path is taken whatever the size.</param>
+    public static OptimalSolverSelection For(int count, bool stationary = true) =>
+        stationary && OptimalSolverChoice.PreferStructured(count)
             ? new(new StructuredSolverAdapter(), "structured (Toeplitz FFT, projected PCG)")
             : new(new DenseNullSpaceSolver(), "dense null-space");
 }

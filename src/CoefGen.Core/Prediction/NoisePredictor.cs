@@ -48,6 +48,12 @@ public static class NoisePredictor
             parts.Add((r.Components[c].Name, perComponent[c]));
         }
 
+        var shot = r.Shot?.QuadraticForm(h) ?? 0.0;
+        if (r.Shot is not null)
+        {
+            parts.Add(("shot noise", shot));
+        }
+
         parts.Add(("quantisation", lsb2 / 12.0 * sumSq));
         if (adc.NoiseLsb != 0)
         {
@@ -59,7 +65,7 @@ public static class NoisePredictor
             .Select(p => new NoiseBudgetEntry(p.Source, p.Variance, budgetTotal > 0 ? p.Variance / budgetTotal : 0))
             .ToArray();
 
-        var variance = perComponent.Sum() + r.DigitalPart(h);
+        var variance = perComponent.Sum() + r.DigitalPart(h) + shot;
         var sigma = Math.Sqrt(Math.Max(0, variance));
         double? fd = null;
         double? agreement = null;

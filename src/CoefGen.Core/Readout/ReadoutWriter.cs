@@ -8,7 +8,7 @@ namespace CoefGen.Core.Readout;
 /// <see cref="ReadoutLoader"/> loads back to an equal description. A measured spectrum is named by its
 /// <see cref="PsdTable.Name"/>; <see cref="ToPsdCsv"/> writes the matching CSV (referred to the ADC).
 /// </summary>
-public static class ReadoutWriter
+public static partial class ReadoutWriter
 {
     public static string ToToml(ReadoutDescription description)
     {
@@ -59,6 +59,12 @@ public static class ReadoutWriter
 
     private static void WriteTiming(StringBuilder w, TimingSpec timing, double rateHz)
     {
+        if (timing.Cycle is not null)
+        {
+            WriteCycle(w, timing, timing.Cycle, rateHz);
+            return;
+        }
+
         w.Append("\n[timing]\n");
         Line(w, "pixel_samples", Int(timing.PixelSamples));
         Line(w, "transfer_sample", Num(TransferSample(timing.TransferTimeS, rateHz)));

@@ -88,15 +88,28 @@ public static class DesignReport
             new[] { T("gain to the ADC"), ReportCell.With("readout.sensor.gain", d.Sensor.Gain, "V/V") },
             new[] { T("volts at the ADC per electron"), ReportCell.Si("readout.sensor.v_at_adc_per_e", d.Sensor.VoltsAtAdcPerElectron, "V/e-") },
             new[] { T("pixel cycle"), ReportCell.With("readout.timing.pixel_samples", t.PixelSamples, $"samples ({Human.SiShort(t.PixelSamples / d.Adc.RateHz, "s")})") },
-            new[] { T("charge transfer"), ReportCell.Si("readout.timing.transfer_time_s", t.TransferTimeS, "s") },
-            new[] { T("step model"), T(t.Step == StepModel.Pole ? "pole (settles through the front-end pole)" : "ideal (instant)") },
-            new[] { T("reset window start"), ReportCell.With("readout.timing.reset.start", t.Reset.Start, "(sample index)") },
-            new[] { T("reset window length"), ReportCell.With("readout.timing.reset.count", t.Reset.Count, "samples") },
-            new[] { T("signal window start"), ReportCell.With("readout.timing.signal.start", t.Signal.Start, "(sample index)") },
-            new[] { T("signal window length"), ReportCell.With("readout.timing.signal.count", t.Signal.Count, "samples") },
-            new[] { T("digital variance per sample (quantisation + ADC noise)"), ReportCell.With("readout.noise.digital_variance_v2", r.Covariance.DigitalVarianceV2, "V^2") },
-            new[] { T("scheme that goes to fixed point"), T(SchemeWords[(int)d.Weights.Scheme]) },
         };
+        var step = new[] { T("step model"), T(t.Step == StepModel.Pole ? "pole (settles through the front-end pole)" : "ideal (instant)") };
+        if (t.Cycle is not null)
+        {
+            rows.Add(step);
+            rows.AddRange(CycleReportRows.Rows(t.Cycle));
+        }
+        else
+        {
+            rows.AddRange(
+            [
+                new[] { T("charge transfer"), ReportCell.Si("readout.timing.transfer_time_s", t.TransferTimeS, "s") },
+                step,
+                new[] { T("reset window start"), ReportCell.With("readout.timing.reset.start", t.Reset.Start, "(sample index)") },
+                new[] { T("reset window length"), ReportCell.With("readout.timing.reset.count", t.Reset.Count, "samples") },
+                new[] { T("signal window start"), ReportCell.With("readout.timing.signal.start", t.Signal.Start, "(sample index)") },
+                new[] { T("signal window length"), ReportCell.With("readout.timing.signal.count", t.Signal.Count, "samples") },
+            ]);
+        }
+
+        rows.Add([T("digital variance per sample (quantisation + ADC noise)"), ReportCell.With("readout.noise.digital_variance_v2", r.Covariance.DigitalVarianceV2, "V^2")]);
+        rows.Add([T("scheme that goes to fixed point"), T(SchemeWords[(int)d.Weights.Scheme])]);
         var blocks = new List<ReportBlock> { new() { Table = rows } };
         blocks.Add(t.Rounding.Count > 0
             ? new ReportBlock { Paragraph = "Nanosecond timing as turned into samples:", Lines = t.Rounding }

@@ -14,11 +14,9 @@ internal static class ReportCharts
         var g = r.Grid;
         var t = r.Description.Timing;
         var rate = g.RateHz;
-        var reset = g.ResetCount;
-        var time = g.TimeS.ToList();
-        time.Insert(reset, double.NaN); // NaN between the windows breaks each line at the gap (the weights are zero there)
+        var time = CycleReportRows.WithBreaks(g, g.TimeS); // NaN between the windows breaks each line at the gap (the weights are zero there)
         var bands = WindowBands(r);
-        var markers = new[] { new ChartMarker(t.TransferTimeS, $"charge transfer {Human.SiShort(t.TransferTimeS, "s")}") };
+        ChartMarker[] markers = t.Cycle is not null ? [] : [new ChartMarker(t.TransferTimeS, $"charge transfer {Human.SiShort(t.TransferTimeS, "s")}")];
         var cycle = t.PixelSamples / rate;
 
         // Both charts share the pixel-cycle time axis, the shaded windows and the transfer marker.
@@ -43,12 +41,12 @@ internal static class ReportCharts
             "Weights over the pixel cycle",
             "Weight of each scheme at every weighted sample against time in the pixel cycle; the reset and signal windows are shaded, the charge transfer is a dashed line.",
             "weight h (ADU per ADU)",
-            [.. r.Weights.Select(w => new ChartSeries(w.Label, time, [.. w.H.Take(reset), double.NaN, .. w.H.Skip(reset)], Style: ChartPalette.Scheme(w.Scheme)))]).Render();
+            [.. r.Weights.Select(w => new ChartSeries(w.Label, time, CycleReportRows.WithBreaks(g, w.H), Style: ChartPalette.Scheme(w.Scheme)))]).Render();
         var step = OverCycle(
             "Step response seen by the weighted samples",
             "Fraction of the charge step that each weighted sample sees (0 before the transfer), against time in the pixel cycle.",
             "step response",
-            [new ChartSeries($"step response as a fraction of the final value ({(t.Step == Readout.StepModel.Pole ? "through the front-end pole" : "ideal step")})", time, [.. g.Step.Take(reset), double.NaN, .. g.Step.Skip(reset)], Style: ChartPalette.Total)],
+            [new ChartSeries($"step response as a fraction of the final value ({(t.Step == Readout.StepModel.Pole ? "through the front-end pole" : "ideal step")})", time, CycleReportRows.WithBreaks(g, g.Step), Style: ChartPalette.Total)],
             -0.05,
             1.2,
             280).Render();
@@ -177,6 +175,12 @@ internal static class ReportCharts
     {
         var g = r.Grid;
         var half = 0.5 / g.RateHz;
+        if (g.IsCycle)
+        {
+            // A general cycle: one band over all its windows (a band per window would bury the chart for many reads).
+            return [new ChartBand(g.TimeS[0] - half, g.TimeS[^1] + half, $"{Human.Whole(g.Windows.Count)} windows, {Human.Whole(g.Count)} weighted samples", "#3b6fb6")];
+        }
+
         var reset = (g.TimeS[0] - half, g.TimeS[g.ResetCount - 1] + half);
         var signal = (g.TimeS[g.ResetCount] - half, g.TimeS[^1] + half);
         return

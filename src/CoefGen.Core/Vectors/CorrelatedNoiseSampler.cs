@@ -10,7 +10,7 @@ namespace CoefGen.Core.Vectors;
 /// When roundoff leaves a pivot non-positive, a diagonal load times the largest variance is added (and
 /// reported), starting at 1e-12 and growing tenfold up to 1e-5: the variance of a weighted sum then changes by that relative amount at most.
 /// </summary>
-public sealed class CorrelatedNoiseSampler
+public sealed class CorrelatedNoiseSampler : IAnalogNoiseSampler
 {
     /// <summary>Above this many weighted samples the dense factor (n^2 doubles) is refused.</summary>
     public const int MaxSamples = 4096;
@@ -32,6 +32,9 @@ public sealed class CorrelatedNoiseSampler
 
     /// <summary>Diagonal load needed for the factorisation (0 when none), V^2.</summary>
     public double DiagonalLoadingV2 { get; }
+
+    /// <summary>Always null: the dense factor is exact (a diagonal load is reported in <see cref="DiagonalLoadingV2"/>).</summary>
+    public string? Note => null;
 
     /// <summary>Builds the factor for the covariance's samples; <paramref name="noise"/> supplies the removed constants.</summary>
     public static CorrelatedNoiseSampler Create(SampledCovariance covariance, NoiseModel noise)

@@ -20,10 +20,24 @@ internal sealed class CycleShape(IntegerDesign design, AdcSpec adc, double basel
     /// <summary>Noise-free cycle with charge q (ADU).</summary>
     public long[] Clean(double chargeAdu) => Fill(k => Quantise(Level(k, chargeAdu)));
 
-    /// <summary>Reset window at one code, signal window at another, the rest at the baseline.</summary>
+    /// <summary>
+    /// Reset window at one code, signal window at another, the rest at the baseline. For a general cycle: samples with
+    /// a negative coefficient at the first code, with a positive one at the second (the same extreme for two windows).
+    /// </summary>
     public long[] Windows(long reset, long signal)
     {
         var baseline = Quantise(baselineAdu);
+        if (design.Windows is not null)
+        {
+            var codes = Fill(_ => baseline);
+            for (var i = 0; i < design.SampleIndex.Count; i++)
+            {
+                codes[design.SampleIndex[i]] = design.Coefficients[i] < 0 ? reset : signal;
+            }
+
+            return codes;
+        }
+
         return Fill(k => design.Reset.Contains(k) ? reset : design.Signal.Contains(k) ? signal : baseline);
     }
 

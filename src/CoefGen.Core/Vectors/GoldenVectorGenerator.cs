@@ -1,4 +1,5 @@
 using CoefGen.Core.FixedPoint;
+using CoefGen.Core.Noise;
 using CoefGen.Core.Pipeline;
 using CoefGen.Core.Readout;
 using CoefGen.Core.Weights;
@@ -58,9 +59,13 @@ public static class GoldenVectorGenerator
         var baseline = adc.MinCode + (BaselineSpanFraction * span) + BaselineFractionAdu;
         var fullCharge = adc.MaxCode - baseline;
         var step = CycleStep(d);
-        var sampler = result.CaptureCovariance is { } measured
+        // A capture's covariance, or the model's by dense Cholesky up to its limit (exact, unchanged results); above
+        // it circulant embedding of the stationary model covariance.
+        IAnalogNoiseSampler sampler = result.CaptureCovariance is { } measured
             ? CorrelatedNoiseSampler.FromCaptureCovariance(measured.Matrix, measured.Count, result.Noise.DigitalVarianceV2)
-            : CorrelatedNoiseSampler.Create(result.Covariance, result.Noise);
+            : result.Covariance.Count <= CorrelatedNoiseSampler.MaxSamples
+                ? CorrelatedNoiseSampler.Create(result.Covariance, result.Noise)
+                : CirculantNoiseSampler.Create(result.Covariance, result.Noise, d.Adc.RateHz);
         var shape = new CycleShape(design, adc, baseline, step);
         var baselineSample = BitExactModel.ToSample(shape.Clean(0.0)[design.SampleIndex[0]], adc.Bits, adc.Coding);
         var (targeted, unreached) = BranchPixels.Build(design, baselineSample);
@@ -77,12 +82,13 @@ public static class GoldenVectorGenerator
             AddedConstantV2 = sampler.AddedConstantV2,
             DiagonalLoadingV2 = sampler.DiagonalLoadingV2,
             UnreachedBranches = unreached,
+            SamplerNote = sampler.Note,
         };
-        return new GoldenVectorSource(info, options.Pixels, Pixels(design, shape, sampler, edges, fullCharge, options));
+        return new GoldenVectorSource(info, options.Pixels, Pixels(design, shape, sampler, result.Covariance.Shot, edges, fullCharge, options));
     }
 
     private static IEnumerable<GoldenPixel> Pixels(
-        IntegerDesign design, CycleShape shape, CorrelatedNoiseSampler sampler, List<(string Kind, double Charge, long[] Codes)> edges, double fullCharge, VectorOptions options)
+        IntegerDesign design, CycleShape shape, IAnalogNoiseSampler sampler, ShotNoiseCovariance? shot, List<(string Kind, double Charge, long[] Codes)> edges, double fullCharge, VectorOptions options)
     {
         GoldenPixel Pixel(string kind, double charge, long[] codes) => new(kind, charge, codes, BitExactModel.RunCycle(design, codes));
         foreach (var (kind, charge, codes) in edges.Take(options.Pixels))
@@ -101,6 +107,7 @@ public static class GoldenVectorGenerator
                 _ => (PixelKind.Noise, 0.0),
             };
             sampler.Sample(rng, noise);
+            shot?.AddDraw(rng.NextGaussian, noise);
             yield return Pixel(kind, charge, shape.Noisy(charge, noise, rng));
         }
     }
@@ -109,6 +116,11 @@ public static class GoldenVectorGenerator
     private static IReadOnlyList<double> CycleStep(ReadoutDescription d)
     {
         var t = d.Timing;
+        if (t.Cycle is not null)
+        {
+            return SampleGrid.StepAtEverySample(d.Adc.RateHz, t.Cycle, t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null, t.PixelSamples);
+        }
+
         if (t.PixelSamples < 2)
         {
             return [0.0];

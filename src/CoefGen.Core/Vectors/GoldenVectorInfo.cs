@@ -30,4 +30,7 @@ public abstract record GoldenVectorInfo
 
     /// <summary>Mode-separating branches (<see cref="DatapathBranch"/>, acc limits) no ADC input reaches, with the reason.</summary>
     public required IReadOnlyList<(string Target, string Reason)> UnreachedBranches { get; init; }
+
+    /// <summary>What the noise sampler had to do that changes the drawn covariance (a clipped circulant embedding), or null.</summary>
+    public string? SamplerNote { get; init; }
 }

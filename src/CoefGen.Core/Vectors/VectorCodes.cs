@@ -38,4 +38,7 @@ public static class VectorCodes
 
     /// <summary>The design has more weighted samples than the generator factors.</summary>
     public const string TooManySamples = "CG4021";
+
+    /// <summary>Warning: the circulant embedding of the noise was not non-negative and was clipped.</summary>
+    public const string EmbeddingClipped = "CG4022";
 }

@@ -6,7 +6,8 @@ namespace CoefGen.Core.Weights;
 public static class BoxcarWeights
 {
     /// <summary>
-    /// Without drift rejection: h = a (-1/N_R on reset, +1/N_S on signal), a = 1 / (mean(s_S) - mean(s_R)).
+    /// Without drift rejection: h = a (-1/N_R on reset, +1/N_S on signal), a = 1 / (mean(s_S) - mean(s_R)); for a
+    /// general cycle the same idea over all windows (<see cref="CycleWindowFit"/>), which is exactly this for two windows.
     /// With drift rejection equal weights cannot satisfy sum h t = 0, so the boxcar becomes the
     /// minimum sum h^2 weights under all three constraints, h = A (A^T A)^-1 b: the ordinary least-squares
     /// estimate of the step with an offset and a slope, which is the optimum for white noise.
@@ -16,12 +17,18 @@ public static class BoxcarWeights
         ArgumentNullException.ThrowIfNull(grid);
         if (rejectDrift)
         {
-            var basis = HouseholderBasis.Factor(ConstraintSystem.FromGrid(grid, rejectDrift: true));
-            return new WeightSet(WeightScheme.Boxcar, "boxcar (drift rejected, least squares)", basis.MinimumNormSolution([0.0, 1.0, 0.0]));
+            var system = ConstraintSystem.FromGrid(grid, rejectDrift: true);
+            var basis = HouseholderBasis.Factor(system);
+            return new WeightSet(WeightScheme.Boxcar, "boxcar (drift rejected, least squares)", basis.MinimumNormSolution(system.Rhs));
         }
 
         var ones = new double[grid.Count];
         Array.Fill(ones, 1.0);
+        if (grid.IsCycle)
+        {
+            return new WeightSet(WeightScheme.Boxcar, "boxcar (window means, least squares)", CycleWindowFit.Weights(grid, ones));
+        }
+
         return new WeightSet(WeightScheme.Boxcar, "boxcar", WindowDifference(grid, ones));
     }
 

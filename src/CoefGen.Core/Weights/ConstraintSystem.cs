@@ -1,7 +1,8 @@
 namespace CoefGen.Core.Weights;
 
 /// <summary>
-/// The linear constraints A^T h = b shared by every scheme: A = [1, s (, t')], b = [0, 1 (, 0)].
+/// The linear constraints A^T h = b shared by every scheme: A = [1, s (, t')], b = [0, 1 (, 0)]; with several
+/// reset groups the ones column becomes one indicator column per group (sum h = 0 over each group, PHYSICS.md §4b).
 /// t' is the sample time centred on its mean and scaled to unit rms, so the drift column is as well
 /// scaled as the others; with sum h = 0 the centring does not change sum h t, and b_t = 0 makes the
 /// scale irrelevant.
@@ -24,6 +25,9 @@ internal sealed class ConstraintSystem
 
     public int Constraints => Columns.Length;
 
+    /// <summary>Any constraint set A^T h = b (small problems of the two-stage design).</summary>
+    public static ConstraintSystem Of(double[][] columns, double[] rhs) => new(columns, rhs);
+
     public static ConstraintSystem FromGrid(SampleGrid grid, bool rejectDrift)
     {
         ArgumentNullException.ThrowIfNull(grid);
@@ -36,12 +40,42 @@ internal sealed class ConstraintSystem
             step[i] = grid.Step[i];
         }
 
+        if (grid.GroupCount > 1)
+        {
+            return Grouped(grid, step, rejectDrift);
+        }
+
         if (!rejectDrift)
         {
             return new ConstraintSystem([ones, step], [0.0, 1.0]);
         }
 
         return new ConstraintSystem([ones, step, CentredTime(grid)], [0.0, 1.0, 0.0]);
+    }
+
+    private static ConstraintSystem Grouped(SampleGrid grid, double[] step, bool rejectDrift)
+    {
+        var groups = grid.GroupCount;
+        var columns = new List<double[]>(groups + 2);
+        for (var g = 0; g < groups; g++)
+        {
+            columns.Add(new double[grid.Count]);
+        }
+
+        for (var i = 0; i < grid.Count; i++)
+        {
+            columns[grid.Group[i]][i] = 1.0;
+        }
+
+        columns.Add(step);
+        var rhs = new double[groups + (rejectDrift ? 2 : 1)];
+        rhs[groups] = 1.0;
+        if (rejectDrift)
+        {
+            columns.Add(CentredTime(grid));
+        }
+
+        return new ConstraintSystem([.. columns], rhs);
     }
 
     /// <summary>Sample times centred on their mean and scaled to unit rms (all zero for one sample).</summary>

@@ -25,7 +25,7 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
         {
             for (var j = 0; j < n; j++)
             {
-                c[(i * n) + j] = r.At(i, j);
+                c[(i * n) + j] = r.FullAt(i, j);
             }
         }
 
@@ -38,12 +38,16 @@ public sealed class DenseNullSpaceSolver : IOptimalSolver
     /// Householder basis Q of the constraints, M = Q^T C Q, M22 z = -M21 y by Cholesky, h = Q [y; z].
     /// Shared by the lag-table path and the capture (general matrix) path.
     /// </summary>
-    internal static double[] SolveOnMatrix(SampleGrid grid, double[] c, bool rejectDrift)
+    internal static double[] SolveOnMatrix(SampleGrid grid, double[] c, bool rejectDrift) =>
+        SolveOnMatrix(ConstraintSystem.FromGrid(grid, rejectDrift), c);
+
+    /// <summary>The null-space step for any constraint set on a symmetric row-major matrix (overwritten).</summary>
+    internal static double[] SolveOnMatrix(ConstraintSystem system, double[] c)
     {
-        var n = grid.Count;
-        var basis = HouseholderBasis.Factor(ConstraintSystem.FromGrid(grid, rejectDrift));
+        var n = system.Rows;
+        var basis = HouseholderBasis.Factor(system);
         var m = basis.Constraints;
-        var y = basis.SolveTransposedTriangle(rejectDrift ? [0.0, 1.0, 0.0] : [0.0, 1.0]);
+        var y = basis.SolveTransposedTriangle(system.Rhs);
 
         var scale = 0.0;
         for (var i = 0; i < n; i++)

@@ -3,10 +3,11 @@ using CoefGen.Core.Readout;
 namespace CoefGen.Core.Weights;
 
 /// <summary>
-/// The weighted samples of one pixel cycle in time order: the reset window, then the signal window.
+/// The weighted samples of one pixel cycle in time order: every window of the cycle (a classic file: the reset
+/// window, then the signal window), each sample with its step response s_k and its reset group.
 /// Index i of every weight vector refers to entry i here.
 /// </summary>
-public sealed class SampleGrid
+public sealed partial class SampleGrid
 {
     private SampleGrid(int[] sampleIndex, double[] timeS, double[] step, int resetCount, double rateHz)
     {
@@ -15,6 +16,9 @@ public sealed class SampleGrid
         Step = step;
         ResetCount = resetCount;
         RateHz = rateHz;
+        Group = new int[sampleIndex.Length];
+        GroupCount = 1;
+        Windows = [new GridWindow(0, resetCount, ChargeSight.None, 0, 0), new GridWindow(resetCount, sampleIndex.Length - resetCount, ChargeSight.Transfer, 0, 0)];
     }
 
     /// <summary>Index of each weighted sample within the pixel cycle (strictly increasing).</summary>
@@ -26,7 +30,7 @@ public sealed class SampleGrid
     /// <summary>Step response s_k: 0 before the transfer, 1 when settled.</summary>
     public IReadOnlyList<double> Step { get; }
 
-    /// <summary>Number of reset-window samples (they come first).</summary>
+    /// <summary>Number of reset-window samples (they come first); for a general cycle, the samples of its first window.</summary>
     public int ResetCount { get; }
 
     public int SignalCount => SampleIndex.Count - ResetCount;
@@ -35,6 +39,7 @@ public sealed class SampleGrid
 
     public double RateHz { get; }
 
+    /// <summary>Classic two-window grids only: sample i lies in the signal window.</summary>
     public bool IsSignal(int i) => i >= ResetCount;
 
     /// <summary>True when every signal sample has s = 1 exactly and every reset sample s = 0.</summary>
@@ -59,6 +64,11 @@ public sealed class SampleGrid
     {
         ArgumentNullException.ThrowIfNull(d);
         var t = d.Timing;
+        if (t.Cycle is not null)
+        {
+            return FromCycle(d.Adc.RateHz, t.Cycle, t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null);
+        }
+
         double? pole = t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null;
         return Create(d.Adc.RateHz, t.Reset, t.Signal, t.TransferTimeS, pole);
     }

@@ -17,16 +17,12 @@ public static class ShapedWeights
     {
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(spec);
-        var reset = Shape(spec, grid.ResetCount, spec.ExplicitReset, "reset");
-        var signal = Shape(spec, grid.SignalCount, spec.ExplicitSignal, "signal");
-        var w = new double[grid.Count];
-        reset.CopyTo(w, 0);
-        signal.CopyTo(w, grid.ResetCount);
-
-        var label = Label(spec, grid);
+        var w = grid.IsCycle ? CycleShape(spec, grid) : TwoWindowShape(spec, grid);
+        var label = grid.IsCycle ? CycleLabel(spec, grid) : Label(spec, grid);
         if (!spec.RejectDrift)
         {
-            return new WeightSet(WeightScheme.Weighted, label, BoxcarWeights.WindowDifference(grid, w));
+            var h0 = grid.IsCycle ? CycleWindowFit.Weights(grid, w) : BoxcarWeights.WindowDifference(grid, w);
+            return new WeightSet(WeightScheme.Weighted, label, h0);
         }
 
         var root = new double[w.Length];
@@ -35,8 +31,9 @@ public static class ShapedWeights
             root[i] = Math.Sqrt(w[i]);
         }
 
-        var basis = HouseholderBasis.Factor(ConstraintSystem.FromGrid(grid, rejectDrift: true).ScaleRows(root));
-        var h = basis.MinimumNormSolution([0.0, 1.0, 0.0]);
+        var system = ConstraintSystem.FromGrid(grid, rejectDrift: true);
+        var basis = HouseholderBasis.Factor(system.ScaleRows(root));
+        var h = basis.MinimumNormSolution(system.Rhs);
         for (var i = 0; i < h.Length; i++)
         {
             h[i] *= root[i];
@@ -73,6 +70,39 @@ public static class ShapedWeights
             default:
                 throw new ArgumentOutOfRangeException(nameof(spec), spec.Window, "unknown window shape");
         }
+    }
+
+    private static double[] TwoWindowShape(WeightsSpec spec, SampleGrid grid)
+    {
+        var reset = Shape(spec, grid.ResetCount, spec.ExplicitReset, "reset");
+        var signal = Shape(spec, grid.SignalCount, spec.ExplicitSignal, "signal");
+        var w = new double[grid.Count];
+        reset.CopyTo(w, 0);
+        signal.CopyTo(w, grid.ResetCount);
+        return w;
+    }
+
+    /// <summary>The same shape in every window of a general cycle (explicit shapes belong to two-window files).</summary>
+    private static double[] CycleShape(WeightsSpec spec, SampleGrid grid)
+    {
+        var w = new double[grid.Count];
+        foreach (var win in grid.Windows)
+        {
+            Shape(spec, win.Count, null, "window").CopyTo(w, win.First);
+        }
+
+        return w;
+    }
+
+    private static string CycleLabel(WeightsSpec spec, SampleGrid grid)
+    {
+        if (spec.Window != WindowShape.Trapezoid)
+        {
+            return "weighted (" + spec.Window.ToString().ToLowerInvariant() + ", every window)";
+        }
+
+        var ramps = grid.Windows.Select(win => WindowShapes.EffectiveRamp(win.Count, spec.RampSamples)).Distinct().Order();
+        return "weighted (trapezoid, ramp " + string.Join("/", ramps.Select(r => r.ToString(CultureInfo.InvariantCulture))) + ", every window)";
     }
 
     private static string Label(WeightsSpec spec, SampleGrid grid)

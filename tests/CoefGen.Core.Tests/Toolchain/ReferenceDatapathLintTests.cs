@@ -56,7 +56,7 @@ public class ReferenceDatapathLintTests
         Assert.Contains("%Warning-WIDTH", r.StdOut + r.StdErr, StringComparison.Ordinal);
     }
 
-    private static void AssertLintClean(DesignResult result)
+    internal static void AssertLintClean(DesignResult result)
     {
         var verilator = Tools.Require("verilator");
         using var dir = new TempDir();

@@ -11,13 +11,22 @@ internal static partial class DescriptionReader
     public static ReadoutDescription? Read(TomlTable document, LoadContext context, string contentSha256)
     {
         var root = new TableReader(context, document);
-        root.RejectUnknown("name", "adc", "sensor", "timing", "noise", "weights", "fixed_point", "emit", "scenarios");
+        root.RejectUnknown("name", "adc", "sensor", "timing", "integration", "noise", "weights", "fixed_point", "emit", "scenarios");
         var name = ReadName(root);
         var adc = AdcSectionReader.Read(root, out var rate);
         var sensor = SensorSectionReader.Read(root, out var gain);
-        var timingInput = TimingSectionReader.Read(root);
+        var isCycle = CycleSectionReader.IsCycle(root);
+        var cycleInput = isCycle ? CycleSectionReader.Read(root) : null;
+        var timingInput = isCycle ? null : TimingSectionReader.Read(root);
         var noise = NoiseSectionReader.Read(root, gain, out var poleGiven);
-        var timing = timingInput is null ? null : TimingResolver.Resolve(timingInput, rate, poleGiven, context);
+        var timing = cycleInput is not null ? CycleResolver.Resolve(cycleInput, rate, poleGiven, context)
+            : timingInput is null ? null : TimingResolver.Resolve(timingInput, rate, poleGiven, context);
+        if (!isCycle && root.Has("integration"))
+        {
+            context.Error(CycleCodes.IntegrationMismatch, root.Entry("integration")!.KeyLocation, "integration",
+                "[integration] applies to ramp windows of a cycle listed with [[timing.window]]; this file has a classic reset/signal timing");
+        }
+
         var weights = WeightsSectionReader.Read(root, timing);
         var scenarios = ScenariosSectionReader.Read(root, noise);
         RequireScenariosForRobust(root, weights, scenarios);

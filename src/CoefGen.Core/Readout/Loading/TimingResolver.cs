@@ -76,7 +76,7 @@ internal static class TimingResolver
         return input.Step ?? (poleGiven ? StepModel.Pole : StepModel.Ideal);
     }
 
-    private static int? ToSamples(TimeQuantity quantity, double rate, bool isStart, List<string> rounding, LoadContext context)
+    internal static int? ToSamples(TimeQuantity quantity, double rate, bool isStart, List<string> rounding, LoadContext context)
     {
         if (!quantity.IsNs)
         {
@@ -138,10 +138,10 @@ internal static class TimingResolver
         }
     }
 
-    private static string Span(SampleWindow w) =>
+    internal static string Span(SampleWindow w) =>
         $"(samples {w.Start.ToString(CultureInfo.InvariantCulture)}..{(w.End - 1).ToString(CultureInfo.InvariantCulture)})";
 
-    private static string Ns(double ns) => ns.ToString("0.###", CultureInfo.InvariantCulture);
+    internal static string Ns(double ns) => ns.ToString("0.###", CultureInfo.InvariantCulture);
 
     private static string Signed(double ns)
     {

@@ -39,7 +39,7 @@ internal static class TimingSectionReader
                 Pair(window, "count", "count_ns", minSamples: 1, NumberRule.Positive));
     }
 
-    private static TimeQuantity? Pair(TableReader table, string samplesKey, string nsKey, long minSamples, NumberRule nsRule)
+    internal static TimeQuantity? Pair(TableReader table, string samplesKey, string nsKey, long minSamples, NumberRule nsRule)
     {
         var key = table.OneOf(samplesKey, nsKey);
         if (key is null)

@@ -33,7 +33,12 @@ internal static class WeightsSectionReader
         var rejectDrift = weights.Flag("reject_drift");
         var reset = weights.NumberArray("reset", PhysicalRange.ShapeWeight);
         var signal = weights.NumberArray("signal", PhysicalRange.ShapeWeight);
-        if (window == WindowShape.Explicit)
+        if (window == WindowShape.Explicit && timing?.Cycle is not null)
+        {
+            context.Error(CycleCodes.TwoWindowOnly, weights.Entry("window")!.ValueLocation, weights.KeyPath("window"),
+                "window = \"explicit\" gives one reset and one signal shape, which applies to a classic two-window timing; with [[timing.window]] use \"triangle\", \"hann\" or \"trapezoid\" (applied to every window)");
+        }
+        else if (window == WindowShape.Explicit)
         {
             CheckShape(weights, "reset", reset, timing?.Reset.Count);
             CheckShape(weights, "signal", signal, timing?.Signal.Count);

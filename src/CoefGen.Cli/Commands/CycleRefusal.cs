@@ -1,0 +1,26 @@
+using CoefGen.Cli.Io;
+using CoefGen.Core.Diagnostics;
+using CoefGen.Core.Readout;
+
+namespace CoefGen.Cli.Commands;
+
+/// <summary>
+/// The stages that still take only the classic two-window cycle (emission, vectors and the reference datapath,
+/// verification, reports, sweeps, captures) refuse a general cycle with a located error instead of writing
+/// something wrong.
+/// </summary>
+internal static class CycleRefusal
+{
+    /// <summary>True (after printing CG1255) when <paramref name="d"/> has a general cycle.</summary>
+    public static bool Refuse(ReadoutDescription d, string what, TextWriter error)
+    {
+        if (d.Timing.Cycle is null)
+        {
+            return false;
+        }
+
+        DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CycleCodes.TwoWindowOnly, d.LocationOf("timing.window"),
+            $"{what} takes the classic two-window cycle ([timing.reset] and [timing.signal]) only; this file lists {d.Timing.Cycle.Windows.Count} windows ([[timing.window]]). `coefgen design` designs, predicts and proves the integer weights of a general cycle", "timing.window")]);
+        return true;
+    }
+}

@@ -1,0 +1,23 @@
+using CoefGen.Core.Noise;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Weights;
+
+namespace CoefGen.Core.Pipeline;
+
+/// <summary>Adds the shot noise of a cycle's integrating charge (at the stated signal level) to the sampled covariance.</summary>
+public static class CycleNoise
+{
+    public static SampledCovariance WithShot(SampledCovariance covariance, SampleGrid grid, ReadoutDescription d)
+    {
+        ArgumentNullException.ThrowIfNull(covariance);
+        ArgumentNullException.ThrowIfNull(grid);
+        ArgumentNullException.ThrowIfNull(d);
+        var shot = d.Timing.Cycle?.ShotNoise;
+        if (shot is null || !(shot.TotalEPerS > 0))
+        {
+            return covariance;
+        }
+
+        return covariance.WithShot(ShotNoiseCovariance.For(grid, d.Sensor, shot.TotalEPerS));
+    }
+}

@@ -1,0 +1,80 @@
+using System.Text.Json;
+
+namespace CoefGen.Cli.Tests;
+
+public class CycleCommandTests
+{
+    private static string Cycle(string name) => RepoPaths.Example(Path.Combine("cycles", name));
+
+    [Theory]
+    [InlineData("skipper_reads.toml", "128 windows in 64 reset groups, 64 repeated reads")]
+    [InlineData("fowler_ir.toml", "2 windows in 1 reset group")]
+    [InlineData("up_the_ramp.toml", "32 windows in 1 reset group, 32 repeated reads")]
+    [InlineData("cms_rows.toml", "8 windows in 4 reset groups, 4 repeated reads")]
+    public void Design_of_each_cycle_example_lists_its_windows_and_a_safe_proof(string example, string cycleLine)
+    {
+        var r = CliRunner.Run("design", Cycle(example));
+        Assert.True(r.ExitCode == 0, r.Error);
+        Assert.Contains(cycleLine, r.Output, StringComparison.Ordinal);
+        Assert.Contains("boxcar (window means, least squares)", r.Output, StringComparison.Ordinal);
+        Assert.Contains("SAFE for every input", r.Output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Ramp_design_prints_the_noise_against_signal_level()
+    {
+        var r = CliRunner.Run("design", Cycle("up_the_ramp.toml"));
+        Assert.True(r.ExitCode == 0, r.Error);
+        Assert.Contains("Noise against signal level", r.Output, StringComparison.Ordinal);
+        Assert.Contains("shot noise", r.Output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Design_json_of_a_cycle_carries_its_windows_and_groups()
+    {
+        var r = CliRunner.Run("design", Cycle("cms_rows.toml"), "--json");
+        Assert.True(r.ExitCode == 0, r.Error);
+        using var doc = JsonDocument.Parse(r.Output);
+        var cycle = doc.RootElement.GetProperty("readout").GetProperty("timing").GetProperty("cycle");
+        Assert.Equal(4, cycle.GetProperty("group_count").GetInt32());
+        Assert.Equal(8, cycle.GetProperty("windows").GetArrayLength());
+        Assert.Equal(240, doc.RootElement.GetProperty("samples").GetProperty("group").GetArrayLength());
+    }
+
+    [Fact]
+    public void A_repetition_past_the_cycle_exits_2_with_a_located_error_and_writes_nothing()
+    {
+        var dir = RepoPaths.TempDir();
+        var path = Path.Combine(dir, "bad.toml");
+        File.WriteAllText(path, File.ReadAllText(Cycle("cms_rows.toml")).Replace("times = 4", "times = 5", StringComparison.Ordinal));
+        var r = CliRunner.Run("emit", path, "-o", Path.Combine(dir, "out"));
+        Assert.Equal(2, r.ExitCode);
+        Assert.Contains("bad.toml:", r.Error, StringComparison.Ordinal);
+        Assert.Contains("CG1252", r.Error, StringComparison.Ordinal);
+        Assert.DoesNotContain("   at ", r.Error, StringComparison.Ordinal);
+        Assert.False(Directory.Exists(Path.Combine(dir, "out")));
+    }
+
+    [Fact]
+    public void Report_of_a_cycle_lists_its_windows_and_sweeps_take_the_read_count()
+    {
+        var dir = RepoPaths.TempDir();
+        var r = CliRunner.Run("report", Cycle("cms_rows.toml"), "-o", dir);
+        Assert.True(r.ExitCode == 0, r.Error);
+        var md = File.ReadAllText(Path.Combine(dir, "report.md"));
+        Assert.Contains("window 'signal#3' (charge after its transfer, reset group 3) start", md, StringComparison.Ordinal);
+
+        var sweep = CliRunner.Run("sweep", Cycle("cms_rows.toml"), "--vary", "timing.repeat.times=1,4", "--json");
+        Assert.True(sweep.ExitCode == 0, sweep.Error);
+        using var doc = JsonDocument.Parse(sweep.Output);
+        Assert.Equal(2, doc.RootElement.GetProperty("points").GetArrayLength());
+    }
+
+    [Fact]
+    public void Window_searches_refuse_a_cycle_with_a_located_error()
+    {
+        var r = CliRunner.Run("sweep", Cycle("cms_rows.toml"), "--split-pixel-time");
+        Assert.Equal(2, r.ExitCode);
+        Assert.Contains("CG1255", r.Error, StringComparison.Ordinal);
+    }
+}
