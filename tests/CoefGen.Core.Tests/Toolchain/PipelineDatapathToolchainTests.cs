@@ -50,6 +50,19 @@ public class PipelineDatapathToolchainTests
         ReferenceBench.AssertPass(Ghdl(dir, prefix, 30, "-gCOEF_HEX=true"), 30);
     }
 
+    /// <summary>A general cycle (correlated multiple sampling, 4 pairs): the coefficient index comes from the sample-index table.</summary>
+    [Fact]
+    public void General_cycle_matches_with_random_stalls()
+    {
+        var r = ExampleDesigns.Load(Path.Combine("cycles", "cms_rows.toml"));
+        Assert.NotNull(r.Datapath.Windows);
+        using var dir = new TempDir();
+        var prefix = ReferenceBench.Write(dir, r, Pixels);
+        ReferenceBench.AssertPass(Icarus(dir, prefix), Pixels);
+        ReferenceBench.AssertPass(Ghdl(dir, prefix, GhdlPixels), GhdlPixels);
+        AssertLintClean(dir, prefix);
+    }
+
     /// <summary>An output a few ADU wide and an accumulator below its proven width: both sticky flags set (and cleared).</summary>
     [Fact]
     public void Saturating_variant_matches_and_raises_both_sticky_flags()
