@@ -18,5 +18,10 @@ public static class ReferenceTemplates
         ("ref-datapath.v.scriban", "_datapath.v"),
         ("ref-tb.v.scriban", "_tb.v"),
         ("ref-tb.c.scriban", "_tb.c"),
+        ("ref-pipeline.v.scriban", "_pipeline.v"),
+        ("ref-pipeline-tb.v.scriban", "_pipeline_tb.v"),
+        ("ref-pipeline.vhd.scriban", "_pipeline.vhd"),
+        ("ref-pipeline-tb.vhd.scriban", "_pipeline_tb.vhd"),
+        ("ref-coefs.hex.scriban", "_coefs.hex"),
     ];
 }

@@ -94,7 +94,7 @@ public class ReferenceDatapathEdgeToolchainTests
     }
 
     /// <summary>The edited example, run twice: a probe (full accumulator) for P and the partial-sum width, then the variant.</summary>
-    private static (EdgeVariant Variant, DesignResult Result, IntegerDesign Probe) Build(string variant)
+    internal static (EdgeVariant Variant, DesignResult Result, IntegerDesign Probe) Build(string variant)
     {
         var v = Variants[variant];
         var example = ExampleDesigns.Load(v.Example).Datapath;

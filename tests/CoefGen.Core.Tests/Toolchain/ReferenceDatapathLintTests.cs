@@ -21,10 +21,7 @@ public class ReferenceDatapathLintTests
     [Fact]
     public void Verilog_datapath_with_post_multiplier_and_truncation_lints_clean_under_verilator_Wall()
     {
-        var toml = File.ReadAllText(ExampleDesigns.ExamplePath("fast_imaging.toml"))
-            .Replace("rounding = \"half-even\"", "rounding = \"truncate\"\nnormalize = \"exact\"", StringComparison.Ordinal);
-        var r = ExampleDesigns.FromText(toml, "fast_exact.toml");
-        Assert.True(r.Datapath.PostMultiplierBits > 0);
+        var r = PostMultiplierExample.FastExactTruncate();
         AssertLintClean(r);
     }
 

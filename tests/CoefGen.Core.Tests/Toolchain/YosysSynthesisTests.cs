@@ -69,7 +69,7 @@ public partial class YosysSynthesisTests
         Assert.NotEqual(0, arrays.ExitCode);
     }
 
-    private static Dictionary<string, int> Cells(string stat)
+    internal static Dictionary<string, int> Cells(string stat)
     {
         var last = stat.LastIndexOf("Number of cells:", StringComparison.Ordinal);
         Assert.True(last >= 0, stat);
