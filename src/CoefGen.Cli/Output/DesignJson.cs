@@ -29,6 +29,7 @@ internal static class DesignJson
             Schemes(w, r);
             RegretJson.Write(w, r);
             FixedPointJson.Write(w, r);
+            TwoStageOutput.Write(w, r);
             w.WriteStartArray("warnings");
             foreach (var d in r.Warnings)
             {

@@ -101,7 +101,7 @@ internal static class Quantiser
     }
 
     /// <summary>Moves |sum - target| entries by one count, those whose rounding went furthest in that direction first.</summary>
-    private static void FixSum(long[] c, double[] x, int[] group, long target)
+    internal static void FixSum(long[] c, double[] x, int[] group, long target)
     {
         var excess = group.Sum(k => c[k]) - target;
         while (excess != 0)
