@@ -30,6 +30,27 @@ public class CycleCommandTests
     }
 
     [Fact]
+    public void Design_of_repeated_reads_prints_the_proved_two_stage_integer_form_in_text_and_json()
+    {
+        var text = CliRunner.Run("design", Cycle("skipper_reads.toml"));
+        Assert.True(text.ExitCode == 0, text.Error);
+        Assert.Contains("two-stage proof SAFE for every input", text.Output, StringComparison.Ordinal);
+        Assert.Contains("noise penalty against the real two-stage weights", text.Output, StringComparison.Ordinal);
+        var json = CliRunner.Run("design", Cycle("skipper_reads.toml"), "--json");
+        Assert.True(json.ExitCode == 0, json.Error);
+        using var doc = JsonDocument.Parse(json.Output);
+        var integer = doc.RootElement.GetProperty("two_stage").GetProperty("integer");
+        Assert.True(integer.GetProperty("proof").GetProperty("safe").GetBoolean());
+        Assert.Equal(0L, integer.GetProperty("per_read_table").EnumerateArray().Sum(v => v.GetInt64()));
+        Assert.Equal(64, integer.GetProperty("read_weights").GetArrayLength());
+        using var plain = JsonDocument.Parse(CliRunner.Run("design", Cycle("cms_rows.toml"), "--json").Output);
+        Assert.Equal(plain.RootElement.TryGetProperty("two_stage", out _), TwoStageExpected("cms_rows"));
+    }
+
+    // cms_rows has several reads per row time: it has a two-stage form exactly when the text design prints one.
+    private static bool TwoStageExpected(string name) => CliRunner.Run("design", Cycle(name + ".toml")).Output.Contains("Two-stage form", StringComparison.Ordinal);
+
+    [Fact]
     public void Design_json_of_a_cycle_carries_its_windows_and_groups()
     {
         var r = CliRunner.Run("design", Cycle("cms_rows.toml"), "--json");
