@@ -38,10 +38,17 @@ internal static class FixedPointJson
         }
 
         w.WriteEndArray();
+        Proof(w, i.Proof, withCodes: true);
+        w.WriteEndObject();
+    }
+
+    /// <summary>The "proof" object: safe, checks (with the worst-case codes when asked) and advice.</summary>
+    public static void Proof(Utf8JsonWriter w, WidthProof proof, bool withCodes)
+    {
         w.WriteStartObject("proof");
-        w.WriteBoolean("safe", i.Proof.Safe);
+        w.WriteBoolean("safe", proof.Safe);
         w.WriteStartArray("checks");
-        foreach (var c in i.Proof.Checks)
+        foreach (var c in proof.Checks)
         {
             w.WriteStartObject();
             w.WriteString("name", c.Name);
@@ -52,7 +59,7 @@ internal static class FixedPointJson
             w.WriteNumber("margin_bits", c.MarginBits);
             w.WriteBoolean("fits", c.Fits);
             w.WriteBoolean("decides_safety", c.Required);
-            if (c.WorstCaseCodes is { } codes)
+            if (withCodes && c.WorstCaseCodes is { } codes)
             {
                 w.WriteStartArray("worst_case_codes");
                 foreach (var code in codes)
@@ -68,13 +75,12 @@ internal static class FixedPointJson
 
         w.WriteEndArray();
         w.WriteStartArray("advice");
-        foreach (var a in i.Proof.Advice)
+        foreach (var a in proof.Advice)
         {
             w.WriteStringValue(a);
         }
 
         w.WriteEndArray();
-        w.WriteEndObject();
         w.WriteEndObject();
     }
 }

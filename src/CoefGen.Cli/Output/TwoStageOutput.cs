@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using CoefGen.Core.FixedPoint.TwoStage;
@@ -61,24 +60,8 @@ internal static class TwoStageOutput
         w.WriteNumber("noise_penalty_percent", d.NoisePenaltyPercent);
         Integers(w, "per_read_table", d.Table);
         Integers(w, "read_weights", d.ReadWeights);
-        w.WriteStartObject("proof");
-        w.WriteBoolean("safe", d.Proof.Safe);
-        w.WriteStartArray("checks");
-        foreach (var c in d.Proof.Checks)
-        {
-            w.WriteStartObject();
-            w.WriteString("name", c.Name);
-            w.WriteString("min", c.MinValue.ToString(CultureInfo.InvariantCulture));
-            w.WriteString("max", c.MaxValue.ToString(CultureInfo.InvariantCulture));
-            w.WriteNumber("required_bits", c.RequiredBits);
-            w.WriteNumber("available_bits", c.AvailableBits);
-            w.WriteBoolean("fits", c.Fits);
-            w.WriteBoolean("decides_safety", c.Required);
-            w.WriteEndObject();
-        }
-
-        w.WriteEndArray();
-        w.WriteEndObject();
+        // The worst-case codes (one whole cycle per check) are left out of the JSON; the proof carries them.
+        FixedPointJson.Proof(w, d.Proof, withCodes: false);
         w.WriteEndObject();
         w.WriteEndObject();
     }
