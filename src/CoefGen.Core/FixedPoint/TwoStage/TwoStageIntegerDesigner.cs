@@ -53,7 +53,7 @@ public static class TwoStageIntegerDesigner
 
         // The smallest stage-1 shift with which the second multiply and accumulator fit (the output shift is not yet known: 0).
         var s1 = 0;
-        while (s1 < 62 && !Stage2Fits(TwoStageWidthProver.Prove(g, w, adc.Bits, adc.Coding, settings, s1, 0), settings))
+        while (s1 < 62 && !Stage2Fits(TwoStageWidthProver.Prove(g, w, adc.Bits, adc.Coding, settings, s1, 0)))
         {
             s1++;
         }
@@ -75,7 +75,7 @@ public static class TwoStageIntegerDesigner
             settings.Rounding, proof, (gainInt - 1) * 1e6, 100 * ((sigmaInt / sigmaReal) - 1));
     }
 
-    private static bool Stage2Fits(WidthProof proof, FixedPointSettings settings) =>
+    private static bool Stage2Fits(WidthProof proof) =>
         proof.Checks.Where(c => c.Name.StartsWith("stage2_", StringComparison.Ordinal) && c.Required && c.Name != "stage2_coefficient").All(c => c.Fits);
 
     /// <summary>c = round(x 2^P) at the largest P with every |c| within limit (after the sum-zero repair when asked).</summary>
