@@ -1,5 +1,6 @@
 using System.Text;
 using System.Text.Json;
+using CoefGen.Core.FixedPoint;
 using CoefGen.Core.FixedPoint.TwoStage;
 using CoefGen.Core.Pipeline;
 using CoefGen.Core.Weights.TwoStage;
@@ -24,7 +25,7 @@ internal static class TwoStageOutput
         foreach (var c in d.Proof.Checks)
         {
             var verdict = c.Fits ? "ok" : c.Required ? "DOES NOT FIT" : "exceeds (not needed for this accumulator)";
-            table.Add(c.Name, Eng.Int(c.MinValue), Eng.Int(c.MaxValue), Eng.Int(c.RequiredBits), Eng.Int(c.AvailableBits), (c.MarginBits >= 0 ? "+" : "") + Eng.Int(c.MarginBits), verdict);
+            table.Add(CheckLabel.Of(c.Name), Eng.Int(c.MinValue), Eng.Int(c.MaxValue), Eng.Int(c.RequiredBits), Eng.Int(c.AvailableBits), (c.MarginBits >= 0 ? "+" : "") + Eng.Int(c.MarginBits), verdict);
         }
 
         sb.Append(table.Render());
