@@ -33,7 +33,7 @@ internal static class InstrumentText
         foreach (var x in design.Widths)
         {
             var who = x.ForcedByOneTable ? $"{x.WidestTable} (the least any table needs: {Eng.Int(x.NarrowestRequiredBits)})" : "all tables alike";
-            w.Add(x.Name.Replace('_', ' '), Eng.Int(x.RequiredBits), Eng.Int(x.AvailableBits), Margin(x.MarginBits) + (x.Required ? "" : " (not needed)"), who);
+            w.Add(CheckLabel.Of(x.Name), Eng.Int(x.RequiredBits), Eng.Int(x.AvailableBits), Margin(x.MarginBits) + (x.Required ? "" : " (not needed)"), who);
         }
 
         sb.Append(w.Render());

@@ -32,7 +32,8 @@ public class InstrumentCommandTests
         }
 
         Assert.Contains("SAFE for every input inside the ADC range, in every table", r.Output, StringComparison.Ordinal);
-        Assert.Matches(@"accumulator final\s+\d+\s+48\s+\+\d+\s+slow/", r.Output);
+        Assert.Matches(@"final accumulator sum\s+\d+\s+48\s+\+\d+\s+slow/", r.Output);
+        Assert.DoesNotContain("accumulator final", r.Output, StringComparison.Ordinal); // check identifiers stay in JSON
 
         var j = CliRunner.Run("design", Path.Combine(RepoPaths.Example("camera4"), "cam4.toml"), "--json");
         using var doc = JsonDocument.Parse(j.Output);
