@@ -90,11 +90,11 @@ internal static class FitCommand
         if (outDir is not null)
         {
             using var batch = new OutputBatch();
-            batch.Add(outDir, "--out", "fit_spectrum.csv", AtomicFile.Encode(FitFiles.SpectrumCsv(analysis)), "--out");
-            batch.Add(outDir, "--out", "fit_spectrum.svg", AtomicFile.Encode(FitFiles.SpectrumSvg(analysis)), "--out");
+            batch.Add(outDir, "--out", "fit_spectrum.csv", Utf8Text.Encode(FitFiles.SpectrumCsv(analysis)), "--out");
+            batch.Add(outDir, "--out", "fit_spectrum.svg", Utf8Text.Encode(FitFiles.SpectrumSvg(analysis)), "--out");
             if (analysis.Validation.Count > 0)
             {
-                batch.Add(outDir, "--out", "fit_weights.csv", AtomicFile.Encode(FitFiles.WeightsCsv(analysis)), "--out");
+                batch.Add(outDir, "--out", "fit_weights.csv", Utf8Text.Encode(FitFiles.WeightsCsv(analysis)), "--out");
             }
 
             if (batch.Commit(error) is null)

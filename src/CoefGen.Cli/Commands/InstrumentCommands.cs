@@ -90,7 +90,7 @@ internal static class InstrumentCommands
             var set = GoldenVectorGenerator.Generate(t.Result, options);
             foreach (var f in VectorFiles.Render(set, ToolInfo.Name, ToolInfo.Version))
             {
-                batch.Add(outDir, "--out", Path.Combine($"{t.Mode}_{t.Channel}", f.Name), AtomicFile.Encode(f.Text), "--out");
+                batch.Add(outDir, "--out", Path.Combine($"{t.Mode}_{t.Channel}", f.Name), Utf8Text.Encode(f.Text), "--out");
                 count++;
             }
         }

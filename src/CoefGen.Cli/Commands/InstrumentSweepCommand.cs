@@ -56,7 +56,7 @@ internal static class InstrumentSweepCommand
 
             var full = Path.GetFullPath(csvPath);
             using var batch = new OutputBatch();
-            batch.Add(Path.GetDirectoryName(full)!, "--csv", Path.GetFileName(full), AtomicFile.Encode(csv), "--csv");
+            batch.Add(Path.GetDirectoryName(full)!, "--csv", Path.GetFileName(full), Utf8Text.Encode(csv), "--csv");
             if (batch.Commit(error) is null)
             {
                 return ExitCodes.BadInput;

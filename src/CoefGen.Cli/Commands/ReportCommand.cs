@@ -75,8 +75,8 @@ internal static class ReportCommand
         var title = $"Instrument report: {design.Spec.Name}";
         var markdown = ReportMarkdown.Render(title, InstrumentReport.Build(design, ToolInfo.Version, "report.md"), []);
         var html = ReportHtml.Render(title, InstrumentReport.Build(design, ToolInfo.Version, "report.html"));
-        batch.Add(dir, "--out", "report.md", AtomicFile.Encode(markdown), "--out");
-        batch.Add(dir, "--out", "report.html", AtomicFile.Encode(html), "--out");
+        batch.Add(dir, "--out", "report.md", Utf8Text.Encode(markdown), "--out");
+        batch.Add(dir, "--out", "report.html", Utf8Text.Encode(html), "--out");
         if (batch.Commit(error) is null)
         {
             return ExitCodes.BadInput;
@@ -113,11 +113,11 @@ internal static class ReportCommand
         var html = ReportHtml.Render(title, sections);
         foreach (var (name, svg) in charts)
         {
-            batch.Add(dir, "--out", Path.Combine(folder, name), AtomicFile.Encode(svg), "--out");
+            batch.Add(dir, "--out", Path.Combine(folder, name), Utf8Text.Encode(svg), "--out");
         }
 
-        batch.Add(dir, "--out", Path.Combine(folder, "report.md"), AtomicFile.Encode(markdown), "--out");
-        batch.Add(dir, "--out", Path.Combine(folder, "report.html"), AtomicFile.Encode(html), "--out");
+        batch.Add(dir, "--out", Path.Combine(folder, "report.md"), Utf8Text.Encode(markdown), "--out");
+        batch.Add(dir, "--out", Path.Combine(folder, "report.html"), Utf8Text.Encode(html), "--out");
         return charts.Count;
     }
 }

@@ -201,7 +201,7 @@ internal static class SweepCommand
     private static void AddFile(OutputBatch batch, string path, string option, string text)
     {
         var full = Path.GetFullPath(path);
-        batch.Add(Path.GetDirectoryName(full)!, option, Path.GetFileName(full), AtomicFile.Encode(text), option);
+        batch.Add(Path.GetDirectoryName(full)!, option, Path.GetFileName(full), Utf8Text.Encode(text), option);
     }
 
     private static WeightScheme? ParseScheme(string word) => word switch
