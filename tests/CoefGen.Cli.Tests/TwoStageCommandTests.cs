@@ -50,4 +50,26 @@ public class TwoStageCommandTests
         Assert.Equal(2, r.ExitCode);
         Assert.Contains("error CG1274: weights.form", r.Error, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Emit_writes_the_two_stage_templates_and_refuses_a_full_table_template_for_a_two_stage_design()
+    {
+        var path = TwoStageSkipper();
+        var outDir = Path.Combine(Path.GetDirectoryName(path)!, "out");
+        var r = CliRunner.Run("emit", path, "--out", outDir, "--format", "two-stage-c-header", "--format", "two-stage-vhdl-package");
+        Assert.True(r.ExitCode == 0, r.Error);
+        var header = File.ReadAllText(Path.Combine(outDir, "skipper_ch0_two_stage.h"));
+        Assert.Contains("#define SKIPPER_CH0_READ_COUNT 64", header, StringComparison.Ordinal);
+        Assert.Contains("static inline int64_t skipper_ch0_apply(const int32_t *codes)", header, StringComparison.Ordinal);
+        Assert.True(File.Exists(Path.Combine(outDir, "skipper_ch0_two_stage_pkg.vhd")));
+
+        var wrong = CliRunner.Run("emit", path, "--out", Path.Combine(outDir, "x"), "--format", "c-header");
+        Assert.Equal(2, wrong.ExitCode);
+        Assert.Contains("CG3103", wrong.Error, StringComparison.Ordinal);
+        Assert.False(Directory.Exists(Path.Combine(outDir, "x")));
+
+        var full = CliRunner.Run("emit", RepoPaths.Example(Path.Combine("cycles", "skipper_reads.toml")), "--out", Path.Combine(outDir, "y"), "--format", "two-stage-c-header");
+        Assert.Equal(2, full.ExitCode);
+        Assert.Contains("need form = \"two-stage\"", full.Error, StringComparison.Ordinal);
+    }
 }
