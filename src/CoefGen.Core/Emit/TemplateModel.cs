@@ -42,17 +42,7 @@ public sealed class TemplateModel
         var d = design;
         var g = new ScriptObject();
         var prefix = IdentifierPrefix.FromName(d.Name);
-        Set(g, "name", ModelText.CommentSafe(d.Name));
-        Set(g, "prefix", prefix);
-        Set(g, "prefix_upper", prefix.ToUpperInvariant());
-        Set(g, "tool_name", ModelText.CommentSafe(provenance.ToolName));
-        Set(g, "tool_version", ModelText.CommentSafe(provenance.ToolVersion));
-        Set(g, "readout_file", ModelText.CommentSafe(provenance.ReadoutFileName));
-        Set(g, "readout_sha256", ModelText.CommentSafe(provenance.ReadoutSha256));
-        Set(g, "scheme", ModelText.CommentSafe(provenance.SchemeLabel));
-        // Comments show people 4 significant figures: a last-digit difference between machines must not change a file.
-        Set(g, "noise_e", Formatting.Human.NumShort(provenance.PredictedReadNoiseElectrons));
-        Set(g, "noise_adu", Formatting.Human.NumShort(provenance.PredictedReadNoiseAdu));
+        Names(g, d.Name, prefix, provenance);
 
         Set(g, "pixel_samples", d.PixelSamples);
         Set(g, "reset_start", d.Reset.Start);
@@ -99,12 +89,7 @@ public sealed class TemplateModel
         Set(g, "rounding_constant_fits_int32", rc <= int.MaxValue);
 
         Modes(g, d.Rounding, d.Accumulator, d.Normalize);
-        Set(g, "coding", ModelText.Word(d.Coding));
-        var offsetBinary = d.Coding == AdcCoding.OffsetBinary;
-        Set(g, "offset_binary", offsetBinary);
-        var adcOffset = offsetBinary ? 1L << (d.AdcBits - 1) : 0L;
-        Set(g, "adc_offset", adcOffset);
-        Set(g, "adc_offset_c", LiteralFormat.C(adcOffset, wide: false));
+        Coding(g, d.Coding, d.AdcBits);
 
         Ranges(g, d);
         Set(g, "proof", Proof(d.Proof));
