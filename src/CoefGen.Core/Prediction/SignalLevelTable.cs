@@ -18,7 +18,7 @@ public static class SignalLevelTable
         ArgumentNullException.ThrowIfNull(d);
         ArgumentNullException.ThrowIfNull(designed);
         var shot = d.Timing.Cycle?.ShotNoise;
-        if (shot is null || grid.ExposureS is null)
+        if (shot is null)
         {
             return [];
         }
