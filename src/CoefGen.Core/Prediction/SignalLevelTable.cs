@@ -17,7 +17,7 @@ public static class SignalLevelTable
         ArgumentNullException.ThrowIfNull(covariance);
         ArgumentNullException.ThrowIfNull(d);
         ArgumentNullException.ThrowIfNull(designed);
-        var shot = d.Timing.Cycle?.ShotNoise;
+        var shot = d.Timing.Cycle.ShotNoise;
         if (shot is null)
         {
             return [];
