@@ -12,21 +12,6 @@ namespace CoefGen.Core.Tests.Cycle;
 /// </summary>
 public class TwoWindowCycleTests
 {
-    private const string Head = """
-        name = "pair"
-
-        [adc]
-        rate_hz = "10 MHz"
-        bits = 16
-        full_scale_v = 2.0
-        noise_lsb = 0.5
-
-        [sensor]
-        conversion_gain_uv_per_e = 5.0
-        gain = 1.0
-
-        """;
-
     private const string Tail = """
 
         [noise]
@@ -46,7 +31,7 @@ public class TwoWindowCycleTests
         normalize = "MODE"
         """;
 
-    private const string Classic = Head + """
+    private const string Classic = CycleFiles.Head + """
         [timing]
         pixel_samples = 200
         transfer_sample = 60
@@ -61,7 +46,7 @@ public class TwoWindowCycleTests
         count = 40
         """ + Tail;
 
-    private const string Windows = Head + """
+    private const string Windows = CycleFiles.Head + """
         [timing]
         pixel_samples = 200
         step = "pole"
@@ -81,7 +66,7 @@ public class TwoWindowCycleTests
         """ + Tail;
 
     /// <summary>A cycle whose first window sees the charge: a second transfer's read comes first in time.</summary>
-    private const string ChargeFirst = Head + """
+    private const string ChargeFirst = CycleFiles.Head + """
         [timing]
         pixel_samples = 300
         step = "ideal"
@@ -120,7 +105,7 @@ public class TwoWindowCycleTests
     private static ReadoutDescription Load(string text, string scheme, string mode)
     {
         var bytes = Encoding.UTF8.GetBytes(text.Replace("SCHEME", scheme, StringComparison.Ordinal).Replace("MODE", mode, StringComparison.Ordinal));
-        var result = ReadoutLoader.Load(bytes, "pair.toml", _ => null);
+        var result = ReadoutLoader.Load(bytes, "cyc.toml", _ => null);
         Assert.True(result.Description is not null, string.Join("\n", result.Diagnostics));
         return result.Description!;
     }
@@ -186,11 +171,8 @@ public class TwoWindowCycleTests
         }
     }
 
-    public static TheoryData<string> CycleExamples => new(
-        Directory.GetFiles(Path.Combine(Pipeline.ShippedExamples.Folder, "cycles"), "*.toml").Select(Path.GetFileName).Order(StringComparer.Ordinal)!);
-
     [Theory]
-    [MemberData(nameof(CycleExamples))]
+    [MemberData(nameof(CycleExampleTests.Names), MemberType = typeof(CycleExampleTests))]
     public void In_shift_mode_the_integer_gain_of_a_cycle_without_ramps_is_exactly_two_to_the_p(string name)
     {
         var loaded = Pipeline.ShippedExamples.Load(Path.Combine("cycles", name));
