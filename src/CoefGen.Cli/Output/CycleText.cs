@@ -74,6 +74,11 @@ internal static class CycleText
     {
         if (TwoStageOutput.Of(r) is not var (two, integer))
         {
+            if (r.CaptureCovariance is not null && CoefGen.Core.Weights.TwoStage.ReadLayout.Of(r.Grid) is not null)
+            {
+                sb.Append("Two-stage form: not designed on a capture (its solver takes the model's per-read blocks); drop noise.capture to see it\n\n");
+            }
+
             return;
         }
 

@@ -1,5 +1,6 @@
 using CoefGen.Core.Capture;
 using CoefGen.Core.Noise;
+using CoefGen.Core.Pipeline;
 using CoefGen.Core.Readout;
 using CoefGen.Core.Weights;
 
@@ -107,5 +108,28 @@ public sealed class CycleCaptureTests
         var loss = (r.QuadraticForm(solution.H) / parametric.VarianceV2) - 1;
         Assert.InRange(loss, -1e-9, WeightTolerance(grid.Count - 2));
         Assert.InRange(covariance.SampleQuadraticForm(parametric.Weights.H) / parametric.VarianceV2, 1 - VarianceTolerance, 1 + VarianceTolerance);
+    }
+
+    [Fact]
+    public void Ramp_design_on_an_idle_capture_adds_the_readouts_shot_noise_and_is_optimal_for_the_sum()
+    {
+        // An idle capture holds the read noise only; the shot noise of the stated signal level comes from the readout
+        // (F min(t_i, t_j), PHYSICS.md §4b). The weights must minimise capture + shot: no worse than the weights designed
+        // on the capture alone, judged on the sum; the budget splits the two exactly.
+        var d = CoefGen.Core.Tests.Pipeline.ShippedExamples.Load(Path.Combine("cycles", "fowler_ir.toml"));
+        var model = DesignPipeline.Run(d, CoefGen.Core.Tests.Pipeline.ShippedExamples.Catalog);
+        var shot = model.Covariance.Shot!;
+        var m = CycleCaptureFixtures.Truth with { RateHz = d.Adc.RateHz, FlickerCornerHz = 2e3, PoleHz = 4e5, LsbV = d.Adc.LsbV };
+        var capture = CycleCaptureFixtures.Pixels(d, new SyntheticCapture(3).CycleCodes(m, 96, new double[d.Timing.PixelSamples]));
+        var result = CaptureDesign.Apply(model, capture);
+        var covariance = result.CaptureCovariance!;
+        var optimal = result.Predictions[2];
+        var h = result.Weights[2].H;
+        Assert.Equal(covariance.QuadraticForm(h) + shot.QuadraticForm(h), optimal.VarianceV2, optimal.VarianceV2 * 1e-12);
+        Assert.Equal(shot.QuadraticForm(h), optimal.Budget[1].VarianceV2, 1e-30);
+        var readOnly = CaptureAnalysis.DesignOnCapture(d, capture, model.Noise).Solution.H;
+        Assert.True(optimal.VarianceV2 <= (covariance.QuadraticForm(readOnly) + shot.QuadraticForm(readOnly)) * (1 + 1e-12));
+        Assert.True(shot.QuadraticForm(h) > 0.05 * optimal.VarianceV2, "the example's shot noise is a visible share");
+        Assert.All(result.Predictions, p => Assert.True(p.VarianceV2 >= optimal.VarianceV2 * (1 - 1e-12)));
     }
 }
