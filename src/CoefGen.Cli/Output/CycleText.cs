@@ -52,7 +52,9 @@ internal static class CycleText
 
     public static void AppendSignalLevels(StringBuilder sb, DesignResult r)
     {
-        var rows = SignalLevelTable.Compute(r.Grid, r.Covariance, r.Description, r.Chosen.H, r.Description.Weights.RejectDrift);
+        var rows = r.CaptureCovariance is { } measured
+            ? CoefGen.Core.Capture.CaptureSignalLevels.Compute(r.Grid, measured, r.Description, r.Chosen.H, r.Description.Weights.RejectDrift)
+            : SignalLevelTable.Compute(r.Grid, r.Covariance, r.Description, r.Chosen.H, r.Description.Weights.RejectDrift);
         if (rows.Count < 2)
         {
             return;

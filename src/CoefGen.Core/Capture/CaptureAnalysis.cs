@@ -169,7 +169,8 @@ public static class CaptureAnalysis
         }
     }
 
-    private static double[] WithShot(double[] matrix, int n, ShotNoiseCovariance shot)
+    /// <summary>C + K: the capture matrix with a shot term added (a new array).</summary>
+    internal static double[] WithShot(double[] matrix, int n, ShotNoiseCovariance shot)
     {
         var m = (double[])matrix.Clone();
         for (var i = 0; i < n; i++)

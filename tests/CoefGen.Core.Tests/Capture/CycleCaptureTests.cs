@@ -131,5 +131,12 @@ public sealed class CycleCaptureTests
         Assert.True(optimal.VarianceV2 <= (covariance.QuadraticForm(readOnly) + shot.QuadraticForm(readOnly)) * (1 + 1e-12));
         Assert.True(shot.QuadraticForm(h) > 0.05 * optimal.VarianceV2, "the example's shot noise is a visible share");
         Assert.All(result.Predictions, p => Assert.True(p.VarianceV2 >= optimal.VarianceV2 * (1 - 1e-12)));
+
+        // The noise-against-level table on the capture: at the design level the designed weights are the optimum there.
+        var rows = CaptureSignalLevels.Compute(result.Grid, covariance, d, h, rejectDrift: false);
+        var here = Assert.Single(rows, row => row.IsDesignLevel);
+        Assert.Equal(optimal.SigmaElectrons, here.DesignedSigmaE, optimal.SigmaElectrons * 1e-9);
+        Assert.Equal(here.OptimalSigmaE, here.DesignedSigmaE, here.DesignedSigmaE * 1e-9);
+        Assert.All(rows, row => Assert.True(row.DesignedSigmaE >= row.OptimalSigmaE * (1 - 1e-9)));
     }
 }
