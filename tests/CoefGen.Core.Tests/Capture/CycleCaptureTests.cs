@@ -12,13 +12,7 @@ public sealed class CycleCaptureTests
     [Fact]
     public void Example_capture_is_exactly_the_documented_synthesis()
     {
-        var expected = SyntheticCapture.ToRaw16(CycleCaptureFixtures.ExampleCodes());
-        if (Environment.GetEnvironmentVariable("COEFGEN_WRITE_EXAMPLE_CAPTURE") == "1")
-        {
-            File.WriteAllBytes(CycleCaptureFixtures.ExampleCapturePath, expected);
-        }
-
-        Assert.Equal(expected, File.ReadAllBytes(CycleCaptureFixtures.ExampleCapturePath));
+        ExampleSynthesis.AssertFileIs(CycleCaptureFixtures.ExampleCapturePath, SyntheticCapture.ToRaw16(CycleCaptureFixtures.ExampleCodes()));
     }
 
     [Fact]
