@@ -31,7 +31,12 @@ public static class CaptureAnalysis
         }
 
         var grid = SampleGrid.FromDescription(description);
-        CheckCycleSize(description, grid, "timing.window");
+        if (capture.Layout == CaptureLayout.PixelSynchronous)
+        {
+            // A stream has no covariance of the weighted samples: only the spectrum and the fit.
+            CheckCycleSize(description, grid, "timing.window");
+        }
+
         var record = CaptureSamples.ResidualStream(capture, adc.LsbV);
         var segment = options.SegmentLength ?? WelchEstimator.DefaultSegmentLength(record.Length);
         if (segment > record.Length / 2)

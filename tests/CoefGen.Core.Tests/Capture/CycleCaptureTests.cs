@@ -1,4 +1,5 @@
 using CoefGen.Core.Capture;
+using CoefGen.Core.Diagnostics;
 using CoefGen.Core.Noise;
 using CoefGen.Core.Pipeline;
 using CoefGen.Core.Readout;
@@ -132,5 +133,21 @@ public sealed class CycleCaptureTests
         Assert.Equal(optimal.SigmaElectrons, here.DesignedSigmaE, optimal.SigmaElectrons * 1e-9);
         Assert.Equal(here.OptimalSigmaE, here.DesignedSigmaE, here.DesignedSigmaE * 1e-9);
         Assert.All(rows, row => Assert.True(row.DesignedSigmaE >= row.OptimalSigmaE * (1 - 1e-9)));
+    }
+
+    [Fact]
+    public void A_cycle_too_large_for_the_capture_covariance_is_CG5009_at_its_windows_but_a_stream_is_still_fitted()
+    {
+        var big = CycleCaptureFixtures.Edited(("times = 8", "times = 129"), ("pixel_samples = 200", "pixel_samples = 3200"));
+        var codes = CycleCaptureFixtures.ExampleCodes()[..(20 * 3200)];
+        var ex = Assert.Throws<InputException>(() => CaptureAnalysis.Run(big, CycleCaptureFixtures.Pixels(big, codes), new CaptureAnalysisOptions()));
+        var error = Assert.Single(ex.Diagnostics);
+        Assert.Equal(CaptureCodes.CycleTooLarge, error.Code);
+        Assert.Equal("timing.window", error.Key);
+        Assert.Contains("2064 weighted samples", error.Message, StringComparison.Ordinal);
+
+        var stream = CaptureAnalysis.Run(big, new SampleCapture("s.i16", CaptureLayout.Stream, 1, codes), new CaptureAnalysisOptions());
+        Assert.Empty(stream.Validation);
+        Assert.True(stream.Fit.Model.WhiteV2PerHz > 0);
     }
 }
