@@ -49,9 +49,9 @@ internal static class FitText
                 table.Add([v.Label, Eng.Num(v.MeasuredSigmaV / perE), $"{Eng.Num(v.LowerSigmaV / perE)}..{Eng.Num(v.UpperSigmaV / perE)}", Eng.Num(v.PredictedModelSigmaV / perE), Eng.Num(v.PredictedCaptureSigmaV / perE)]);
             }
 
-            // 28 columns hold the classic labels; a cycle's longer weighted label widens the column.
+            // 28 columns hold the classic labels (kept as they were, byte for byte); a cycle's longer labels widen the column.
             var longest = table.Max(r => r[0].Length);
-            var labelWidth = longest > 28 ? longest + 1 : 28;
+            var labelWidth = a.Grid.IsCycle && longest > 28 ? longest + 1 : 28;
             foreach (var row in table)
             {
                 w.Append("  ").Append(row[0].PadRight(labelWidth));
