@@ -90,12 +90,22 @@ public sealed record CaptureCovariance(int Count, double[] Matrix, double[] Samp
             for (var i = 0; i < n; i++)
             {
                 var xi = x[row + i];
-                for (var j = 0; j < n; j++)
+                for (var j = i; j < n; j++)
                 {
                     var w = xi * x[row + j];
                     sum[(i * n) + j] += w;
                     sumSq[(i * n) + j] += w * w;
                 }
+            }
+        }
+
+        // The upper triangle mirrored: x_i x_j = x_j x_i exactly, summed in the same order of cycles.
+        for (var i = 0; i < n; i++)
+        {
+            for (var j = 0; j < i; j++)
+            {
+                sum[(i * n) + j] = sum[(j * n) + i];
+                sumSq[(i * n) + j] = sumSq[(j * n) + i];
             }
         }
 
