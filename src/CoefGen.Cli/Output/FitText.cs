@@ -51,7 +51,7 @@ internal static class FitText
 
             // 28 columns hold the classic labels (kept as they were, byte for byte); a cycle's longer labels widen the column.
             var longest = table.Max(r => r[0].Length);
-            var labelWidth = a.Grid.IsCycle && longest > 28 ? longest + 1 : 28;
+            var labelWidth = !d.Timing.Cycle.IsClassic && longest > 28 ? longest + 1 : 28;
             foreach (var row in table)
             {
                 w.Append("  ").Append(row[0].PadRight(labelWidth));

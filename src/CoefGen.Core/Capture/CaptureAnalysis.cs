@@ -167,7 +167,7 @@ public static class CaptureAnalysis
 
     private static void CheckCycleSize(ReadoutDescription d, SampleGrid grid, string key)
     {
-        if (grid.IsCycle && grid.Count > MaxCycleSamples)
+        if (!d.Timing.Cycle.IsClassic && grid.Count > MaxCycleSamples)
         {
             throw new InputException(Diagnostic.Error(CaptureCodes.CycleTooLarge, d.LocationOf(key),
                 $"the cycle has {Int(grid.Count)} weighted samples; a capture covariance is dense and takes at most {Int(MaxCycleSamples)} (fewer reads or shorter windows; `coefgen design` without noise.capture takes the full cycle)", key));

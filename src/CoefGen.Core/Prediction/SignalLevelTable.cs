@@ -31,8 +31,8 @@ public static class SignalLevelTable
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(d);
         ArgumentNullException.ThrowIfNull(variances);
-        var shot = d.Timing.Cycle?.ShotNoise;
-        if (shot is null || grid.ExposureS is null)
+        var shot = d.Timing.Cycle.ShotNoise;
+        if (shot is null)
         {
             return [];
         }
