@@ -37,12 +37,17 @@ public static class ReferenceBench
         return model.Prefix;
     }
 
-    public static ToolResult Ghdl(TempDir dir, string prefix, int pixels)
+    /// <summary>Analyses the VHDL package, datapath and bench in GHDL and runs the bench on the first <paramref name="pixels"/> pixels.</summary>
+    /// <param name="dir">Folder holding the files.</param>
+    /// <param name="prefix">Identifier prefix of the files.</param>
+    /// <param name="pixels">Pixels to run.</param>
+    /// <param name="package">The VHDL package file the datapath uses (default the vhdl-package's, prefix_coefs_pkg.vhd).</param>
+    public static ToolResult Ghdl(TempDir dir, string prefix, int pixels, string? package = null)
     {
         var ghdl = Tools.Require("ghdl");
         Directory.CreateDirectory(Path.Combine(dir.Path, "work"));
         ToolRunner.RunOk(ghdl, dir.Path, Emitted.Timeout, "-a", "--std=08", "-Werror", "--workdir=work",
-            prefix + "_coefs_pkg.vhd", prefix + "_datapath.vhd", prefix + "_tb.vhd");
+            package ?? prefix + "_coefs_pkg.vhd", prefix + "_datapath.vhd", prefix + "_tb.vhd");
         return ToolRunner.Run(ghdl, dir.Path, Emitted.Timeout, "-r", "--std=08", "--workdir=work", prefix + "_tb", $"-gMAX_PIXELS={pixels}");
     }
 

@@ -42,14 +42,7 @@ public class TwoStageDatapathToolchainTests
         return model.Prefix;
     }
 
-    private static ToolResult Ghdl(TempDir dir, string prefix, int pixels)
-    {
-        var ghdl = Tools.Require("ghdl");
-        Directory.CreateDirectory(Path.Combine(dir.Path, "work"));
-        ToolRunner.RunOk(ghdl, dir.Path, Emitted.Timeout, "-a", "--std=08", "-Werror", "--workdir=work",
-            prefix + "_two_stage_pkg.vhd", prefix + "_datapath.vhd", prefix + "_tb.vhd");
-        return ToolRunner.Run(ghdl, dir.Path, Emitted.Timeout, "-r", "--std=08", "--workdir=work", prefix + "_tb", $"-gMAX_PIXELS={pixels}");
-    }
+    private static ToolResult Ghdl(TempDir dir, string prefix, int pixels) => ReferenceBench.Ghdl(dir, prefix, pixels, prefix + "_two_stage_pkg.vhd");
 
     [Theory]
     [MemberData(nameof(Names))]
