@@ -213,7 +213,7 @@ internal static class SweepCommand
         _ => null,
     };
 
-    private static DesignPoint PointFor(string readoutPath)
+    internal static DesignPoint PointFor(string readoutPath)
     {
         var baseDir = Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";
         return new DesignPoint(readoutPath, relative => InputFiles.ReadRelative(baseDir, relative, out _), InputFiles.LoadTargets());
