@@ -23,4 +23,11 @@ internal static class CycleRefusal
             $"{what} takes the classic two-window cycle ([timing.reset] and [timing.signal]) only; this file lists {d.Timing.Cycle.Windows.Count} windows ([[timing.window]]). `coefgen design` designs, predicts and proves the integer weights of a general cycle", "timing.window")]);
         return true;
     }
+
+    /// <summary>CG1255 at timing.window with a message of the caller's (a stage that takes some general cycles, not this one).</summary>
+    public static int RefuseWith(ReadoutDescription d, string message, TextWriter error)
+    {
+        DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error(CycleCodes.TwoWindowOnly, d.LocationOf("timing.window"), message, "timing.window")]);
+        return ExitCodes.BadInput;
+    }
 }

@@ -102,16 +102,30 @@ internal static class SweepCommand
 
         ReadoutDescription? baseline = null;
         WeightScheme? chosen = null;
+        ReadCountAxis? readAxis = null;
         if (target is not null || split)
         {
             var baseResult = DesignRunner.TryRun(path, error);
-            // The window searches resize one reset and one signal window; a general cycle is swept by its keys (--vary).
-            if (baseResult is null || CycleRefusal.Refuse(baseResult.Description, "--target-noise-e and --split-pixel-time", error))
+            if (baseResult is null)
             {
                 return ExitCodes.BadInput;
             }
 
             baseline = baseResult.Description;
+            // A general cycle: the target search varies the read count, the split divides one read (Study/ReadCountSearch, ReadSplitSearch).
+            if (baseline.Timing.Cycle is not null)
+            {
+                if (target is not null && (readAxis = ReadCountAxis.Of(text, baseline, out var noAxis)) is null)
+                {
+                    return CycleRefusal.RefuseWith(baseline, $"--target-noise-e on a general cycle searches the read count; {noAxis}. Sweep its keys with --vary (e.g. timing.window[0].count)", error);
+                }
+
+                if (split && ReadSplitSearch.Refusal(text, baseline) is { } noSplit)
+                {
+                    return CycleRefusal.RefuseWith(baseline, $"--split-pixel-time on a general cycle splits one read; {noSplit}", error);
+                }
+            }
+
             chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
             if (chosen is null)
             {
@@ -142,8 +156,10 @@ internal static class SweepCommand
             }
         }
 
-        var targetResult = target is double x ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
-        var splitResult = split ? PixelSplitSearch.Run(text, baseline!, point, chosen!.Value) : null;
+        var cycle = baseline?.Timing.Cycle is not null;
+        var targetResult = target is double x && !cycle ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
+        var readTarget = target is double y && cycle ? ReadCountSearch.Run(text, baseline!, readAxis!, point, y, chosen!.Value) : null;
+        var splitResult = !split ? null : cycle ? ReadSplitSearch.Run(text, baseline!, point, chosen!.Value) : PixelSplitSearch.Run(text, baseline!, point, chosen!.Value);
         var wrote = new List<string>();
         if (sweep is not null && (csvPath is not null || plotPath is not null))
         {
@@ -174,7 +190,7 @@ internal static class SweepCommand
 
         if (json)
         {
-            output.Write(SweepJson.Render(sweep, targetResult, splitResult));
+            output.Write(SweepJson.Render(sweep, targetResult, splitResult, readTarget));
             return ExitCodes.Ok;
         }
 
@@ -187,6 +203,11 @@ internal static class SweepCommand
         if (targetResult is not null)
         {
             parts.Add(SweepSearchText.Target(targetResult, baseline!.Adc.RateHz));
+        }
+
+        if (readTarget is not null)
+        {
+            parts.Add(ReadCountSearchText.Target(readTarget, baseline!.Adc.RateHz));
         }
 
         if (splitResult is not null)

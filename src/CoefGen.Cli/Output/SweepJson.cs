@@ -10,7 +10,7 @@ internal static class SweepJson
 {
     public const string Schema = "coefgen.sweep/1";
 
-    public static string Render(SweepResult? sweep, TargetNoiseResult? target, SplitResult? split)
+    public static string Render(SweepResult? sweep, TargetNoiseResult? target, SplitResult? split, ReadCountTargetResult? readTarget = null)
     {
         using var stream = new MemoryStream();
         var options = new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping, NewLine = "\n" };
@@ -63,11 +63,23 @@ internal static class SweepJson
                 w.WriteEndObject();
             }
 
+            if (readTarget is not null)
+            {
+                ReadCountTarget(w, readTarget);
+            }
+
             if (split is not null)
             {
                 w.WriteStartObject("split_pixel_time");
                 w.WriteString("scheme", DesignText.SchemeWord(split.Scheme));
                 w.WriteNumber("pixel_samples", split.PixelSamples);
+                if (split.ReadPeriodSamples is int period)
+                {
+                    // A general cycle: the split fills one read period, and every read takes it.
+                    w.WriteNumber("read_period_samples", period);
+                    w.WriteNumber("read_count", split.ReadCount);
+                }
+
                 w.WriteNumber("trial_count", split.TrialCount);
                 w.WriteString("note", split.Note);
                 Trials(w, "best", split.Best is null ? [] : [split.Best]);
@@ -79,6 +91,38 @@ internal static class SweepJson
         }
 
         return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+    }
+
+    /// <summary>The target search of a general cycle, over the read count: the shape of the two-window "target_noise" with N in reads.</summary>
+    private static void ReadCountTarget(Utf8JsonWriter w, ReadCountTargetResult r)
+    {
+        w.WriteStartObject("target_noise");
+        w.WriteNumber("target_e_rms", r.TargetElectrons);
+        w.WriteString("scheme", DesignText.SchemeWord(r.Scheme));
+        w.WriteString("varies", r.Axis.Key);
+        if (r.Reads is int n)
+        {
+            w.WriteNumber("read_count", n);
+        }
+        else
+        {
+            w.WriteNull("read_count");
+        }
+
+        w.WriteBoolean("monotone", r.Monotone);
+        w.WriteString("note", r.Note);
+        w.WriteStartArray("trials");
+        foreach (var t in r.Trials)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("read_count", t.Reads);
+            w.WriteNumber("cycle_pixel_samples", t.PixelSamples);
+            Outcome(w, t.Outcome);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteEndObject();
     }
 
     private static void Trials(Utf8JsonWriter w, string name, IEnumerable<WindowTrial> trials)

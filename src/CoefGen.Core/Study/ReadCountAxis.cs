@@ -42,7 +42,7 @@ public sealed class ReadCountAxis
     public string Key => Kind == ReadCountKind.Repeat ? "timing.repeat.times" : "timing.window[*].count";
 
     /// <summary>What N counts, for people.</summary>
-    public string Noun => Kind == ReadCountKind.Repeat ? "reads" : "reads per group (Fowler-N)";
+    public string Noun => Kind == ReadCountKind.Repeat ? "reads" : "reads per group";
 
     /// <summary>The read-count axis of <paramref name="d"/>, or null with <paramref name="why"/> when the cycle has none.</summary>
     public static ReadCountAxis? Of(string text, ReadoutDescription d, out string why)
