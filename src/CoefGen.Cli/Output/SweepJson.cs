@@ -46,19 +46,7 @@ internal static class SweepJson
             if (target is not null)
             {
                 w.WriteStartObject("target_noise");
-                w.WriteNumber("target_e_rms", target.TargetElectrons);
-                w.WriteString("scheme", DesignText.SchemeWord(target.Scheme));
-                if (target.WindowCount is int n)
-                {
-                    w.WriteNumber("window_count", n);
-                }
-                else
-                {
-                    w.WriteNull("window_count");
-                }
-
-                w.WriteBoolean("monotone", target.Monotone);
-                w.WriteString("note", target.Note);
+                TargetHead(w, target.TargetElectrons, target.Scheme, null, "window_count", target.WindowCount, target.Monotone, target.Note);
                 Trials(w, "trials", target.Trials);
                 w.WriteEndObject();
             }
@@ -97,20 +85,7 @@ internal static class SweepJson
     private static void ReadCountTarget(Utf8JsonWriter w, ReadCountTargetResult r)
     {
         w.WriteStartObject("target_noise");
-        w.WriteNumber("target_e_rms", r.TargetElectrons);
-        w.WriteString("scheme", DesignText.SchemeWord(r.Scheme));
-        w.WriteString("varies", r.Axis.Key);
-        if (r.Reads is int n)
-        {
-            w.WriteNumber("read_count", n);
-        }
-        else
-        {
-            w.WriteNull("read_count");
-        }
-
-        w.WriteBoolean("monotone", r.Monotone);
-        w.WriteString("note", r.Note);
+        TargetHead(w, r.TargetElectrons, r.Scheme, r.Axis.Key, "read_count", r.Reads, r.Monotone, r.Note);
         w.WriteStartArray("trials");
         foreach (var t in r.Trials)
         {
@@ -123,6 +98,29 @@ internal static class SweepJson
 
         w.WriteEndArray();
         w.WriteEndObject();
+    }
+
+    /// <summary>The members of "target_noise" before its trials; <paramref name="varies"/> only for a general cycle.</summary>
+    private static void TargetHead(Utf8JsonWriter w, double targetElectrons, CoefGen.Core.Readout.WeightScheme scheme, string? varies, string countName, int? count, bool monotone, string note)
+    {
+        w.WriteNumber("target_e_rms", targetElectrons);
+        w.WriteString("scheme", DesignText.SchemeWord(scheme));
+        if (varies is not null)
+        {
+            w.WriteString("varies", varies);
+        }
+
+        if (count is int n)
+        {
+            w.WriteNumber(countName, n);
+        }
+        else
+        {
+            w.WriteNull(countName);
+        }
+
+        w.WriteBoolean("monotone", monotone);
+        w.WriteString("note", note);
     }
 
     private static void Trials(Utf8JsonWriter w, string name, IEnumerable<WindowTrial> trials)
