@@ -115,14 +115,14 @@ internal static class SweepCommand
             // A general cycle: the target search varies the read count, the split divides one read (Study/ReadCountSearch, ReadSplitSearch).
             if (baseline.Timing.Cycle is not null)
             {
-                if (target is not null && (readAxis = ReadCountAxis.Of(text, baseline, out var noAxis)) is null)
+                if (target is not null && (readAxis = ReadCountAxis.Of(text, baseline, out var noAxis)) is null && ReadSplitSearch.Refusal(text, baseline) is { } noRead)
                 {
-                    return CycleRefusal.RefuseWith(baseline, $"--target-noise-e on a general cycle searches the read count; {noAxis}. Sweep its keys with --vary (e.g. timing.window[0].count)", error);
+                    return CycleRefusal.RefuseWith(baseline, $"--target-noise-e on a general cycle searches the read count, or the window length of a read written once; {noAxis}, and {noRead}. Sweep its keys with --vary (e.g. timing.window[0].count)", error);
                 }
 
                 if (split && ReadSplitSearch.Refusal(text, baseline) is { } noSplit)
                 {
-                    return CycleRefusal.RefuseWith(baseline, $"--split-pixel-time on a general cycle splits one read; {noSplit}", error);
+                    return CycleRefusal.RefuseWith(baseline, $"--split-pixel-time on a general cycle splits one read; {noSplit}; vary its windows with --vary timing.window[i].count", error);
                 }
             }
 
@@ -157,8 +157,10 @@ internal static class SweepCommand
         }
 
         var cycle = baseline?.Timing.Cycle is not null;
-        var targetResult = target is double x && !cycle ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
-        var readTarget = target is double y && cycle ? ReadCountSearch.Run(text, baseline!, readAxis!, point, y, chosen!.Value) : null;
+        var targetResult = target is not double x ? null
+            : !cycle ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value)
+            : readAxis is null ? ReadSplitSearch.EqualWindowTarget(text, baseline!, point, x, chosen!.Value) : null;
+        var readTarget = target is double y && readAxis is not null ? ReadCountSearch.Run(text, baseline!, readAxis, point, y, chosen!.Value) : null;
         var splitResult = !split ? null : cycle ? ReadSplitSearch.Run(text, baseline!, point, chosen!.Value) : PixelSplitSearch.Run(text, baseline!, point, chosen!.Value);
         var wrote = new List<string>();
         if (sweep is not null && (csvPath is not null || plotPath is not null))

@@ -23,13 +23,18 @@ public static class TargetNoiseSearch
             throw new ArgumentException("target must be a positive number of electrons", nameof(targetElectrons));
         }
 
-        var layout = WindowLayout.Of(baseline);
+        return Run(baseText, WindowLayout.Of(baseline), (WindowLayout l, string t, out string? e) => l.Apply(t, out e), baseline.SourcePath, point, targetElectrons, scheme);
+    }
+
+    /// <summary>The search on any layout, written into the text by <paramref name="write"/>: the classic cycle, or the one read of a general cycle.</summary>
+    internal static TargetNoiseResult Run(string baseText, WindowLayout layout, LayoutWriter write, string sourcePath, DesignPoint point, double targetElectrons, WeightScheme scheme)
+    {
         WindowLayout Equal(int n) => layout with { ResetCount = n, SignalCount = n };
         PointOutcome Evaluate(int n)
         {
-            var text = Equal(n).Apply(baseText, out var error);
+            var text = write(Equal(n), baseText, out var error);
             return text is null
-                ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG6001", Diagnostics.SourceLocation.FileOnly(baseline.SourcePath), error ?? "cannot edit the timing")])
+                ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG6001", Diagnostics.SourceLocation.FileOnly(sourcePath), error ?? "cannot edit the timing")])
                 : point.Evaluate(text);
         }
 

@@ -82,13 +82,53 @@ public class CycleStudyCommandTests
     private static string I(JsonElement e, string name) => e.GetProperty(name).GetInt32().ToString(CultureInfo.InvariantCulture);
 
     [Fact]
+    public void A_read_written_once_as_windows_searches_exactly_as_the_classic_file_does()
+    {
+        // fast_imaging's two windows written as [[timing.window]] without a repetition: the general cycle's searches
+        // (ReadWindows) must find the classic searches' layouts and noise, through the other code path of every stage.
+        var classic = RepoPaths.Example("fast_imaging.toml");
+        var text = File.ReadAllText(classic);
+        var timing = text[text.IndexOf("[timing]", StringComparison.Ordinal)..text.IndexOf("[noise]", StringComparison.Ordinal)];
+        const string windows = "[timing]\npixel_samples = 80\nstep = \"ideal\"\n\n" +
+            "[[timing.window]]\nname = \"reset\"\nstart = 6\ncount = 28\nsees = \"reset\"\n\n" +
+            "[[timing.window]]\nname = \"signal\"\nstart = 46\ncount = 28\nsees = \"charge\"\ntransfer_sample = 40\n\n";
+        var cycle = Path.Combine(RepoPaths.TempDir(), "fast_cycle.toml");
+        File.WriteAllText(cycle, text.Replace(timing, windows, StringComparison.Ordinal));
+        static JsonElement Run(string path)
+        {
+            var r = CliRunner.Run("sweep", path, "--split-pixel-time", "--target-noise-e", "3", "--scheme", "optimal", "--json");
+            Assert.True(r.ExitCode == 0, r.Error);
+            using var doc = JsonDocument.Parse(r.Output);
+            return doc.RootElement.Clone();
+        }
+
+        var (a, b) = (Run(classic), Run(cycle));
+        Assert.False(b.GetProperty("split_pixel_time").TryGetProperty("read_period_samples", out _));
+        Assert.Equal(a.GetProperty("target_noise").GetProperty("window_count").GetInt32(), b.GetProperty("target_noise").GetProperty("window_count").GetInt32());
+        foreach (var (section, list) in new[] { ("target_noise", "trials"), ("split_pixel_time", "best"), ("split_pixel_time", "neighbours") })
+        {
+            var (x, y) = (a.GetProperty(section).GetProperty(list), b.GetProperty(section).GetProperty(list));
+            Assert.Equal(x.GetArrayLength(), y.GetArrayLength());
+            for (var i = 0; i < x.GetArrayLength(); i++)
+            {
+                foreach (var key in new[] { "reset_start", "reset_count", "transfer_sample", "dead_samples", "signal_start", "signal_count" })
+                {
+                    Assert.Equal(x[i].GetProperty(key).GetDouble(), y[i].GetProperty(key).GetDouble());
+                }
+
+                Assert.Equal(x[i].GetProperty("schemes")[2].GetProperty("noise_e_rms").GetDouble(), y[i].GetProperty("schemes")[2].GetProperty("noise_e_rms").GetDouble(), 1e-12);
+            }
+        }
+    }
+
+    [Fact]
     public void A_ramp_cycle_refuses_the_split_with_the_reason()
     {
         var r = CliRunner.Run("sweep", Cycle("up_the_ramp.toml"), "--split-pixel-time");
         Assert.Equal(2, r.ExitCode);
         Assert.Contains("up_the_ramp.toml:", r.Error, StringComparison.Ordinal);
         Assert.Contains("CG1255", r.Error, StringComparison.Ordinal);
-        Assert.Contains("ramp cycle has no pedestal/signal split", r.Error, StringComparison.Ordinal);
+        Assert.Contains("a ramp cycle has no pedestal/signal windows to resize", r.Error, StringComparison.Ordinal);
     }
 
     [Fact]
