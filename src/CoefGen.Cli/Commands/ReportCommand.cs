@@ -88,7 +88,7 @@ internal static class ReportCommand
 
     /// <summary>A cycle with a read count: the cycle designed again at other read counts (null for every other readout).</summary>
     private static ReadCountCurve? ReadCounts(string path, DesignResult result) =>
-        result.Description.Timing.Cycle is not null && InputFiles.ReadReadoutBytes(path, out _) is { } bytes
+        !result.Description.Timing.Cycle.IsClassic && InputFiles.ReadReadoutBytes(path, out _) is { } bytes
             ? ReadCountStudy.Run(new System.Text.UTF8Encoding(false).GetString(bytes), result, SweepCommand.PointFor(path))
             : null;
 

@@ -113,7 +113,7 @@ internal static class SweepCommand
 
             baseline = baseResult.Description;
             // A general cycle: the target search varies the read count, the split divides one read (Study/ReadCountSearch, ReadSplitSearch).
-            if (baseline.Timing.Cycle is not null)
+            if (!baseline.Timing.Cycle.IsClassic)
             {
                 if (target is not null && (readAxis = ReadCountAxis.Of(text, baseline, out var noAxis)) is null && ReadSplitSearch.Refusal(text, baseline) is { } noRead)
                 {
@@ -156,7 +156,7 @@ internal static class SweepCommand
             }
         }
 
-        var cycle = baseline?.Timing.Cycle is not null;
+        var cycle = baseline is not null && !baseline.Timing.Cycle.IsClassic;
         var targetResult = target is not double x ? null
             : !cycle ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value)
             : readAxis is null ? ReadSplitSearch.EqualWindowTarget(text, baseline!, point, x, chosen!.Value) : null;

@@ -55,10 +55,15 @@ public sealed class TemplateModel
         Set(g, "noise_adu", Formatting.Human.NumShort(provenance.PredictedReadNoiseAdu));
 
         Set(g, "pixel_samples", d.PixelSamples);
-        Set(g, "reset_start", d.Reset.Start);
-        Set(g, "reset_count", d.Reset.Count);
-        Set(g, "signal_start", d.Signal.Start);
-        Set(g, "signal_count", d.Signal.Count);
+        if (d.Reset is { } reset && d.Signal is { } signal)
+        {
+            // The classic design's RESET_/SIGNAL_ constants; a general cycle has its window table instead (CycleModel).
+            Set(g, "reset_start", reset.Start);
+            Set(g, "reset_count", reset.Count);
+            Set(g, "signal_start", signal.Start);
+            Set(g, "signal_count", signal.Count);
+        }
+
         Set(g, "coef_count", d.Coefficients.Count);
         Set(g, "sample_index", Array(d.SampleIndex));
         Set(g, "last_index", d.Coefficients.Count - 1);
@@ -145,7 +150,7 @@ public sealed class TemplateModel
     private static void Validate(IntegerDesign d)
     {
         var n = d.Coefficients.Count;
-        var windowed = d.Windows is null ? d.Reset.Count + d.Signal.Count : d.Windows.Sum(w => w.Count);
+        var windowed = d.Windows?.Sum(w => w.Count) ?? (d.Reset?.Count ?? 0) + (d.Signal?.Count ?? 0);
         if (n == 0 || d.SampleIndex.Count != n || windowed != n)
         {
             throw new ArgumentException("coefficients, sample indices and window counts disagree", nameof(d));

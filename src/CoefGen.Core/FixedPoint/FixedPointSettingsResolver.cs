@@ -12,7 +12,7 @@ public static class FixedPointSettingsResolver
         ArgumentNullException.ThrowIfNull(catalog);
         var spec = description.FixedPoint;
         var adcBits = description.Adc.Bits;
-        var count = description.Timing.CycleWindows.Sum(w => w.Samples.Count);
+        var count = description.Timing.Cycle.Windows.Sum(w => w.Samples.Count);
         var bag = new DiagnosticBag();
         SourceLocation At(string key) => description.LocationOf("fixed_point." + key);
 

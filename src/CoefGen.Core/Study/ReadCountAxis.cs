@@ -50,7 +50,7 @@ public sealed class ReadCountAxis
         ArgumentNullException.ThrowIfNull(text);
         ArgumentNullException.ThrowIfNull(d);
         var cycle = d.Timing.Cycle;
-        if (cycle is null)
+        if (cycle.IsClassic)
         {
             why = "a classic two-window file has no read count";
             return null;

@@ -31,7 +31,7 @@ public static class ReadCountStudy
             points.Add(n == axis.FileCount ? PointOf(n, file, []) : Design(axis, baseText, point, n, file.Description.SourcePath));
         }
 
-        var ramp = axis.Kind == ReadCountKind.Repeat && file.Description.Timing.CycleWindows.Any(w => w.Sees == ChargeSight.Ramp);
+        var ramp = axis.Kind == ReadCountKind.Repeat && file.Description.Timing.Cycle.Windows.Any(w => w.Sees == ChargeSight.Ramp);
         return new ReadCountCurve(axis, points, ramp ? ReadCountLaw.RampFit : ReadCountLaw.InverseSqrt);
     }
 

@@ -17,7 +17,12 @@ internal sealed record ReadWindows(WindowLayout Layout, int? PeriodSamples, int 
     /// <summary>The read of <paramref name="d"/>'s cycle, or null with <paramref name="why"/>.</summary>
     public static ReadWindows? Of(string text, ReadoutDescription d, out string why)
     {
-        var cycle = d.Timing.Cycle ?? throw new ArgumentException("a general cycle is needed", nameof(d));
+        var cycle = d.Timing.Cycle;
+        if (cycle.IsClassic)
+        {
+            throw new ArgumentException("a general cycle ([[timing.window]]) is needed; a classic file has WindowLayout.Of", nameof(d));
+        }
+
         var windows = cycle.Windows;
         var repeated = cycle.RepeatCount >= 2;
         var copies = windows.Where(w => w.Read == 1).Select(w => w.Name[..w.Name.LastIndexOf('#')]).ToHashSet(StringComparer.Ordinal);

@@ -38,7 +38,7 @@ internal sealed class CycleShape(IntegerDesign design, AdcSpec adc, double basel
             return codes;
         }
 
-        return Fill(k => design.Reset.Contains(k) ? reset : design.Signal.Contains(k) ? signal : baseline);
+        return Fill(k => design.Reset!.Contains(k) ? reset : design.Signal!.Contains(k) ? signal : baseline);
     }
 
     /// <summary>Weighted samples at the baseline, the others alternating between the rails.</summary>
