@@ -57,15 +57,12 @@ public sealed class ReadCountAxis
         }
 
         var windows = cycle.Windows;
-        if (cycle.RepeatCount >= 2)
+        if (RepeatedRead.Of(cycle) is { } read)
         {
-            var copies = windows.Where(w => w.Read == 1).ToDictionary(w => w.Name[..w.Name.LastIndexOf('#')], w => w.Samples.Start, StringComparer.Ordinal);
-            var members = windows.Where(w => w.Read == 0 && copies.ContainsKey(w.Name)).ToList();
-            var period = copies[members[0].Name] - members[0].Samples.Start;
-            var firstRead = members.Min(w => w.Samples.Start);
-            var after = windows.Any(w => w.Read == 0 && !copies.ContainsKey(w.Name) && w.Samples.Start > firstRead);
+            var firstRead = read.Windows[0].Samples.Start;
+            var after = windows.Any(w => read.IsOutside(w) && w.Samples.Start > firstRead);
             why = "";
-            return new ReadCountAxis(ReadCountKind.Repeat, cycle.RepeatCount, period, d.Timing.PixelSamples, !after, []);
+            return new ReadCountAxis(ReadCountKind.Repeat, cycle.RepeatCount, read.PeriodSamples, d.Timing.PixelSamples, !after, []);
         }
 
         var names = WrittenWindows.Names(text);

@@ -24,9 +24,9 @@ internal sealed record ReadWindows(WindowLayout Layout, int? PeriodSamples, int 
         }
 
         var windows = cycle.Windows;
-        var repeated = cycle.RepeatCount >= 2;
-        var copies = windows.Where(w => w.Read == 1).Select(w => w.Name[..w.Name.LastIndexOf('#')]).ToHashSet(StringComparer.Ordinal);
-        var read = repeated ? windows.Where(w => w.Read == 0 && copies.Contains(w.Name)).ToList() : [.. windows];
+        var repetition = RepeatedRead.Of(cycle);
+        var repeated = repetition is not null;
+        var read = repetition?.Windows ?? windows;
         var names = WrittenWindows.Names(text);
         if (read.Count != 2 || read[0].Sees != ChargeSight.None || read[1].Sees != ChargeSight.Transfer || read[0].ResetGroup != read[1].ResetGroup
             || names is null || read.Any(w => names.Count(n => n == w.Name) != 1))
@@ -38,9 +38,7 @@ internal sealed record ReadWindows(WindowLayout Layout, int? PeriodSamples, int 
         }
 
         var (pedestal, signal) = (read[0], read[1]);
-        var period = repeated
-            ? windows.First(w => w.Name == pedestal.Name + "#1").Samples.Start - pedestal.Samples.Start
-            : d.Timing.PixelSamples - pedestal.Samples.Start;
+        var period = repetition?.PeriodSamples ?? d.Timing.PixelSamples - pedestal.Samples.Start;
         var transfer = signal.ChargeTimeS * d.Adc.RateHz;
         var layout = new WindowLayout(
             pedestal.Samples.Start, pedestal.Samples.Count, Math.Round(transfer - pedestal.Samples.End, 9), Math.Round(signal.Samples.Start - transfer, 9),
