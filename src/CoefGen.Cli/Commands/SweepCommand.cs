@@ -24,8 +24,8 @@ internal static class SweepCommand
         var csv = new Option<FileInfo?>("--csv") { Description = "Also write the sweep as CSV to this path." };
         var plot = new Option<FileInfo?>("--plot") { Description = "Also write an SVG plot of read noise against the first varied key." };
         var json = new Option<bool>("--json") { Description = "Print JSON (schema coefgen.sweep/1) instead of tables." };
-        var target = new Option<double?>("--target-noise-e") { Description = "Find the smallest equal reset/signal window count (in samples) whose read noise meets this many e- rms." };
-        var split = new Option<bool>("--split-pixel-time") { Description = "For the file's pixel cycle, find the split between reset window, dead time and signal window with the lowest read noise." };
+        var target = new Option<double?>("--target-noise-e") { Description = "Find the smallest equal reset/signal window count (in samples) whose read noise meets this many e- rms; for a cycle with repeated reads or Fowler-N groups, the smallest read count." };
+        var split = new Option<bool>("--split-pixel-time") { Description = "For the file's pixel cycle, find the split between reset window, dead time and signal window with the lowest read noise; for repeated reads, the split of one read period, taken by every read." };
         var scheme = new Option<string?>("--scheme") { Description = "Scheme the searches optimise: boxcar, weighted, optimal or robust (default: the file's weights.scheme)." };
         var cmd = new Command(
             "sweep",
