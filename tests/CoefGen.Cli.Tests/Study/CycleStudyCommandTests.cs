@@ -122,6 +122,23 @@ public class CycleStudyCommandTests
     }
 
     [Fact]
+    public void A_fowler_target_beyond_reach_stops_where_the_groups_no_longer_fit_and_says_so()
+    {
+        // Fowler-8 in a 2100-sample cycle, late group at 2020: N = 128 runs past the cycle, so doubling stops there.
+        var r = CliRunner.Run("sweep", Cycle("fowler_ir.toml"), "--target-noise-e", "0.1", "--json");
+        Assert.True(r.ExitCode == 0, r.Error);
+        using var doc = JsonDocument.Parse(r.Output);
+        var t = doc.RootElement.GetProperty("target_noise");
+        Assert.Equal("timing.window[*].count", t.GetProperty("varies").GetString());
+        Assert.Equal(JsonValueKind.Null, t.GetProperty("read_count").ValueKind);
+        Assert.Contains("N = 128 is not a valid design", t.GetProperty("note").GetString(), StringComparison.Ordinal);
+        var trials = t.GetProperty("trials").EnumerateArray().ToList();
+        Assert.Equal([1, 2, 4, 8, 16, 32, 64, 128], trials.Select(x => x.GetProperty("read_count").GetInt32()));
+        Assert.True(t.GetProperty("monotone").GetBoolean());
+        Assert.False(trials[^1].GetProperty("valid").GetBoolean());
+    }
+
+    [Fact]
     public void A_ramp_cycle_refuses_the_split_with_the_reason()
     {
         var r = CliRunner.Run("sweep", Cycle("up_the_ramp.toml"), "--split-pixel-time");
