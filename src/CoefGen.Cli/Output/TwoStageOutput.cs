@@ -10,9 +10,17 @@ namespace CoefGen.Cli.Output;
 /// <summary>The two-stage form of repeated reads, real and integer, for `design` text and --json.</summary>
 internal static class TwoStageOutput
 {
-    /// <summary>Null when the cycle has no two-stage form.</summary>
+    /// <summary>
+    /// Null when the cycle has no two-stage form, and for a design on a capture (noise.capture): the two-stage solver
+    /// works on the model's Toeplitz blocks, not on a measured matrix, and its noise would not compare with the capture's.
+    /// </summary>
     public static (TwoStageResult Real, TwoStageIntegerDesign Integer)? Of(DesignResult r)
     {
+        if (r.CaptureCovariance is not null)
+        {
+            return null;
+        }
+
         var two = TwoStageWeights.Design(r.Grid, r.Covariance, r.Description.Weights.RejectDrift);
         return two is null ? null : (two, TwoStageIntegerDesigner.Design(r.Grid, r.Covariance, two, r.Description.Adc, r.FixedPointSettings));
     }
