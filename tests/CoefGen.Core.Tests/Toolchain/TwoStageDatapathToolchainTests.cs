@@ -10,7 +10,7 @@ namespace CoefGen.Core.Tests.Toolchain;
 
 /// <summary>
 /// The two-stage reference datapaths (templates/ref-two-stage-datapath.v and .vhd, with the shared self-checking benches)
-/// against the two-stage golden vectors: 0 mismatches in Icarus and GHDL on both representative cases, a clean Verilator
+/// against the two-stage golden vectors: 0 mismatches in Icarus, GHDL and the C bench (gcc) on both representative cases, a clean Verilator
 /// -Wall lint, and a corrupted table entry fails both (negative control).
 /// </summary>
 public class TwoStageDatapathToolchainTests
@@ -53,6 +53,25 @@ public class TwoStageDatapathToolchainTests
         var prefix = Write(dir, r, 60);
         ReferenceBench.AssertPass(ReferenceBench.Icarus(dir, prefix), 60);
         ReferenceBench.AssertPass(Ghdl(dir, prefix, 20), 20);
+        ReferenceBench.AssertPass(ReferenceBench.C(dir, prefix), 60);
+    }
+
+    /// <summary>Negative control for the C bench's second comparison: one read sum of the goldens changed, the output kept.</summary>
+    [Fact]
+    public void The_C_bench_compares_every_read_sum()
+    {
+        var r = TwoStageCases.Skipper();
+        using var dir = new TempDir();
+        var prefix = Write(dir, r, 12);
+        var path = Path.Combine(dir.Path, "expected_read_sums.txt");
+        var lines = File.ReadAllLines(path);
+        var fields = lines[^1].Split(' ');
+        fields[3] = (long.Parse(fields[3], System.Globalization.CultureInfo.InvariantCulture) + 1).ToString(System.Globalization.CultureInfo.InvariantCulture);
+        lines[^1] = string.Join(' ', fields);
+        File.WriteAllLines(path, lines);
+        var run = ReferenceBench.C(dir, prefix);
+        ReferenceBench.AssertFail(run);
+        Assert.Contains("read sum 3 differs first", run.StdOut, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -79,5 +98,6 @@ public class TwoStageDatapathToolchainTests
         var prefix = Write(dir, r, 30, d with { Table = table });
         ReferenceBench.AssertFail(ReferenceBench.Icarus(dir, prefix));
         ReferenceBench.AssertFail(Ghdl(dir, prefix, 30));
+        ReferenceBench.AssertFail(ReferenceBench.C(dir, prefix));
     }
 }
