@@ -17,7 +17,7 @@ using CoefGen.Core.Weights.Structured;
 //   design             BenchmarkDotNet: the whole DesignPipeline.Run of each shipped example and of a 2x4096 readout
 MathNet.Numerics.Control.UseManaged();
 var mode = args.Length > 0 ? args[0] : "bench";
-var sizes = args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).ToArray();
+var sizes = mode == "stages" ? [] : args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).ToArray();
 switch (mode)
 {
     case "bench":
@@ -111,6 +111,10 @@ switch (mode)
     case "twostage":
         // Two-stage design of N repeated reads (default 1000 reads x 2 x 64), then dense vs two-stage at 16 reads.
         TwoStageScale.Run(sizes.Length > 0 ? sizes[0] : 1000, sizes.Length > 1 ? sizes[1] : 64, sizes.Length > 2 ? sizes[2] : 16);
+        break;
+
+    case "stages":
+        StageProfile.Run(args[1]);
         break;
 
     default:

@@ -1,0 +1,48 @@
+using System.Diagnostics;
+using System.Globalization;
+using CoefGen.Core.Noise;
+using CoefGen.Core.Pipeline;
+using CoefGen.Core.Prediction;
+using CoefGen.Core.Readout;
+using CoefGen.Core.Weights;
+using CoefGen.Core.Weights.Structured;
+using CoefGen.Core.Weights.TwoStage;
+
+namespace CoefGen.Benchmarks;
+
+/// <summary>Stopwatch around each public stage of the design of one readout file (profiling aid).</summary>
+public static class StageProfile
+{
+    public static void Run(string path)
+    {
+        var d = RepoFiles.Load(File.ReadAllBytes(path), path, _ => null);
+        var sw = Stopwatch.StartNew();
+        void Lap(string what)
+        {
+            using var self = Process.GetCurrentProcess();
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{what,-28} {sw.Elapsed.TotalMilliseconds,9:F0} ms  ws {self.WorkingSet64 / 1048576.0,6:F0} MiB peak {self.PeakWorkingSet64 / 1048576.0,6:F0} MiB"));
+            sw.Restart();
+        }
+
+        var grid = SampleGrid.FromDescription(d);
+        Lap("grid");
+        var noise = NoiseModel.FromDescription(d);
+        var cov = CycleNoise.WithShot(noise.Sample(grid), grid, d);
+        Lap("covariance");
+        var box = BoxcarWeights.Compute(grid, d.Weights.RejectDrift);
+        Lap("boxcar");
+        var shaped = ShapedWeights.Compute(grid, d.Weights);
+        Lap("weighted");
+        var sol = new StructuredSolverAdapter().Solve(grid, cov, d.Weights.RejectDrift);
+        Lap("structured optimal");
+        foreach (var w in new[] { box, shaped, new WeightSet(WeightScheme.Optimal, "optimal", sol.H) })
+        {
+            NoisePredictor.Predict(w, cov, d.Adc, d.Sensor, null);
+        }
+
+        Lap("3 predictions");
+        var two = TwoStageWeights.Design(grid, cov, d.Weights.RejectDrift);
+        Lap($"two-stage ({two?.Iterations})");
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"var optimal {sol.VarianceV2:E6} two-stage {two?.VarianceV2:E6} boxcar {cov.QuadraticForm(box.H):E6}"));
+    }
+}
