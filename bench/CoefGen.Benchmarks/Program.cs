@@ -113,6 +113,10 @@ switch (mode)
         TwoStageScale.Run(sizes.Length > 0 ? sizes[0] : 1000, sizes.Length > 1 ? sizes[1] : 64, sizes.Length > 2 ? sizes[2] : 16);
         break;
 
+    case "fft":
+        FftProbe.Run(sizes[0], sizes[1]);
+        break;
+
     case "stages":
         StageProfile.Run(args[1]);
         break;

@@ -17,10 +17,13 @@ public static class StageProfile
     {
         var d = RepoFiles.Load(File.ReadAllBytes(path), path, _ => null);
         var sw = Stopwatch.StartNew();
+        var cpu = Process.GetCurrentProcess().TotalProcessorTime;
         void Lap(string what)
         {
             using var self = Process.GetCurrentProcess();
-            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{what,-28} {sw.Elapsed.TotalMilliseconds,9:F0} ms  ws {self.WorkingSet64 / 1048576.0,6:F0} MiB peak {self.PeakWorkingSet64 / 1048576.0,6:F0} MiB"));
+            var now = self.TotalProcessorTime;
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{what,-28} {sw.Elapsed.TotalMilliseconds,9:F0} ms wall {(now - cpu).TotalMilliseconds,8:F0} ms cpu  ws {self.WorkingSet64 / 1048576.0,6:F0} MiB peak {self.PeakWorkingSet64 / 1048576.0,6:F0} MiB"));
+            cpu = now;
             sw.Restart();
         }
 
@@ -33,9 +36,9 @@ public static class StageProfile
         Lap("boxcar");
         var shaped = ShapedWeights.Compute(grid, d.Weights);
         Lap("weighted");
-        var sol = new StructuredSolverAdapter().Solve(grid, cov, d.Weights.RejectDrift);
-        Lap("structured optimal");
-        foreach (var w in new[] { box, shaped, new WeightSet(WeightScheme.Optimal, "optimal", sol.H) })
+        var sol = StructuredOptimalSolver.Solve(cov, ConstraintSystem.FromGrid(grid, d.Weights.RejectDrift));
+        Lap($"structured optimal ({sol.Iterations} it)");
+        foreach (var w in new[] { box, shaped, new WeightSet(WeightScheme.Optimal, "optimal", [.. sol.Weights]) })
         {
             NoisePredictor.Predict(w, cov, d.Adc, d.Sensor, null);
         }
