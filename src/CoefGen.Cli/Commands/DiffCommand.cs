@@ -90,7 +90,8 @@ internal static class DiffCommand
 
         try
         {
-            return [TableSummary.Of("design", DesignPipeline.Run(load.Description, InputFiles.LoadTargets(), frequencyCheck: false))];
+            var result = DesignPipeline.Run(load.Description, InputFiles.LoadTargets(), frequencyCheck: false);
+            return TwoStageRefusal.Refuse(result, "diff", error) ? null : [TableSummary.Of("design", result)];
         }
         catch (InputException ex)
         {

@@ -35,7 +35,7 @@ internal static class EmitCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null)
+            if (result is null || TwoStageRefusal.Refuse(result, "emit", error))
             {
                 return ExitCodes.BadInput;
             }

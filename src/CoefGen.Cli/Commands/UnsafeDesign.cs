@@ -12,9 +12,9 @@ internal static class UnsafeDesign
     /// <summary>The located diagnostic naming every failed check and the proof's advice.</summary>
     public static Diagnostic Describe(DesignResult r, bool asError)
     {
-        var failed = r.Datapath.Proof.Checks.Where(c => c.Required && !c.Fits)
+        var failed = r.Proof.Checks.Where(c => c.Required && !c.Fits)
             .Select(c => $"{CheckLabel.Of(c.Name)} needs {c.RequiredBits} bits, has {c.AvailableBits}");
-        var advice = r.Datapath.Proof.Advice.Count > 0 ? " Change: " + string.Join(" ", r.Datapath.Proof.Advice.Select(a => a.TrimEnd().EndsWith('.') ? a.TrimEnd() : a.TrimEnd() + ".")) : "";
+        var advice = r.Proof.Advice.Count > 0 ? " Change: " + string.Join(" ", r.Proof.Advice.Select(a => a.TrimEnd().EndsWith('.') ? a.TrimEnd() : a.TrimEnd() + ".")) : "";
         var message = $"the integer design is NOT SAFE for every input in the ADC range ({string.Join("; ", failed)}).{advice}";
         var location = r.Description.LocationOf("fixed_point");
         return asError
@@ -25,7 +25,7 @@ internal static class UnsafeDesign
     /// <summary>Prints the refusal and returns the exit code, or null when the design is safe or unsafe output is allowed.</summary>
     public static int? Refuse(DesignResult r, bool allowUnsafe, TextWriter error)
     {
-        if (r.Datapath.Proof.Safe)
+        if (r.Proof.Safe)
         {
             return null;
         }
@@ -46,7 +46,7 @@ internal static class UnsafeDesign
     /// <summary>With --require-safe and an unsafe design: prints CG2020 as an error and returns 1; otherwise null.</summary>
     public static int? RequireSafe(DesignResult r, bool required, TextWriter error)
     {
-        if (!required || r.Datapath.Proof.Safe)
+        if (!required || r.Proof.Safe)
         {
             return null;
         }

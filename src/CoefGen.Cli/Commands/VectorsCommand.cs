@@ -40,7 +40,7 @@ internal static class VectorsCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null)
+            if (result is null || TwoStageRefusal.Refuse(result, "vectors", error))
             {
                 return ExitCodes.BadInput;
             }

@@ -72,7 +72,7 @@ internal static class CycleText
     /// <summary>Repeated identical reads: the two-stage form (per-read table x per-read weights) and its penalty.</summary>
     public static void AppendTwoStage(StringBuilder sb, DesignResult r)
     {
-        if (TwoStageOutput.Of(r) is not var (two, integer))
+        if (r.TwoStage is not { Real: var two, Quantised: var integer })
         {
             return;
         }
@@ -82,8 +82,12 @@ internal static class CycleText
         var optimal = r.Predictions[^1].SigmaElectrons;
         var average = r.Predictions[0].SigmaElectrons;
         sb.Append($"Two-stage form (one table of {two.PerReadTable.Length} weights per read x {two.ReadWeights.Length} read weights, designed jointly in {two.Iterations} alternating steps)\n");
-        sb.Append($"  {Eng.Num(sigma)} e- rms: x{Eng.Num(sigma / optimal, 6)} of the full optimum ({Eng.Num(optimal)} e-), x{Eng.Num(sigma / average, 6)} of the plain average ({Eng.Num(average)} e-); quantised and proved below, not emitted (the tables above are the full cycle's)\n");
+        sb.Append($"  {Eng.Num(sigma)} e- rms: x{Eng.Num(sigma / optimal, 6)} of the full optimum ({Eng.Num(optimal)} e-), x{Eng.Num(sigma / average, 6)} of the plain average ({Eng.Num(average)} e-); {Role(r)}\n");
         TwoStageOutput.AppendInteger(sb, integer);
         sb.Append('\n');
     }
+
+    private static string Role(DesignResult r) => r.IsTwoStage
+        ? "the datapath (form = \"two-stage\"): quantised, proved below and emitted; the full table is not quantised"
+        : "quantised and proved below, not emitted (the tables above are the full cycle's)";
 }

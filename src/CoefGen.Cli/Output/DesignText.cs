@@ -19,8 +19,16 @@ internal static class DesignText
         Budget(sb, r);
         CycleText.AppendSignalLevels(sb, r);
         CycleText.AppendTwoStage(sb, r);
-        FixedPointText.Append(sb, r);
-        WeightsText.Append(sb, r, allWeights);
+        if (r.IsTwoStage)
+        {
+            TwoStageOutput.AppendTables(sb, r, allWeights);
+        }
+        else
+        {
+            FixedPointText.Append(sb, r);
+            WeightsText.Append(sb, r, allWeights);
+        }
+
         return sb.ToString();
     }
 

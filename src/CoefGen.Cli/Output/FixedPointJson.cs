@@ -10,6 +10,12 @@ internal static class FixedPointJson
 {
     public static void Write(Utf8JsonWriter w, DesignResult r)
     {
+        if (r.IsTwoStage)
+        {
+            TwoStageSettings(w, r);
+            return;
+        }
+
         var i = r.Datapath;
         w.WriteStartObject("fixed_point");
         w.WriteString("target", r.FixedPointSettings.TargetName);
@@ -39,6 +45,24 @@ internal static class FixedPointJson
 
         w.WriteEndArray();
         Proof(w, i.Proof, withCodes: true);
+        w.WriteEndObject();
+    }
+
+    /// <summary>With form = "two-stage" the settings only: the tables, shifts and proof are under "two_stage.integer".</summary>
+    private static void TwoStageSettings(Utf8JsonWriter w, DesignResult r)
+    {
+        var s = r.FixedPointSettings;
+        w.WriteStartObject("fixed_point");
+        w.WriteString("target", s.TargetName);
+        w.WriteString("scheme", DesignText.SchemeWord(r.Chosen.Scheme));
+        w.WriteString("form", "two-stage");
+        w.WriteNumber("coef_bits", s.CoefBits);
+        w.WriteNumber("sample_bits", s.SampleBits);
+        w.WriteNumber("acc_bits", s.AccBits);
+        w.WriteString("accumulator", s.Accumulator == AccumulatorMode.Wrap ? "wrap" : "saturate");
+        w.WriteNumber("output_bits", s.OutputBits);
+        w.WriteString("rounding", DesignText.RoundingWord(s.Rounding));
+        w.WriteBoolean("safe", r.Proof.Safe);
         w.WriteEndObject();
     }
 

@@ -3,20 +3,12 @@ using System.Text.Json;
 using CoefGen.Core.FixedPoint;
 using CoefGen.Core.FixedPoint.TwoStage;
 using CoefGen.Core.Pipeline;
-using CoefGen.Core.Weights.TwoStage;
 
 namespace CoefGen.Cli.Output;
 
 /// <summary>The two-stage form of repeated reads, real and integer, for `design` text and --json.</summary>
 internal static class TwoStageOutput
 {
-    /// <summary>Null when the cycle has no two-stage form.</summary>
-    public static (TwoStageResult Real, TwoStageIntegerDesign Integer)? Of(DesignResult r)
-    {
-        var two = TwoStageWeights.Design(r.Grid, r.Covariance, r.Description.Weights.RejectDrift);
-        return two is null ? null : (two, TwoStageIntegerDesigner.Design(r.Grid, r.Covariance, two, r.Description.Adc, r.FixedPointSettings));
-    }
-
     public static void AppendInteger(StringBuilder sb, TwoStageIntegerDesign d)
     {
         sb.Append($"  integer form: table of {d.Table.Count} coefficients at 2^{d.P1} (sum {Eng.Int(d.Table.Sum())}), {d.ReadWeights.Count} read weights at 2^{d.P2}; r_j = round(acc1_j / 2^{d.Stage1Shift}); out = round(acc2 / 2^{d.Shift}), {d.OutputFracBits} fraction bits\n");
@@ -38,9 +30,46 @@ internal static class TwoStageOutput
         }
     }
 
+    /// <summary>With form = "two-stage": both tables, real and integer (first and last entries unless all are asked for).</summary>
+    public static void AppendTables(StringBuilder sb, DesignResult r, bool all)
+    {
+        var (real, d, layout) = r.TwoStage!;
+        var s = r.FixedPointSettings;
+        sb.Append($"Two-stage tables ({r.ChosenPrediction.Label} on target {s.TargetName}; g ~ c / 2^{d.P1}, a ~ w / 2^{d.P2} up to the normalisation to unit gain)\n");
+        var table = new TextTable("entry", "offset", "g", "c");
+        Rows(table, d.Table.Count, all, p => table.Add(Eng.Int(p), Eng.Int(layout.Offsets[p]), Eng.Num(real.PerReadTable[p], 6), Eng.Int(d.Table[p])));
+        sb.Append(table.Render());
+        var reads = new TextTable("read", "first sample", "a", "w");
+        Rows(reads, d.ReadWeights.Count, all, j => reads.Add(Eng.Int(j), Eng.Int(r.Grid.SampleIndex[0] + (j * layout.Period)), Eng.Num(real.ReadWeights[j], 6), Eng.Int(d.ReadWeights[j])));
+        sb.Append(reads.Render());
+        if (!all)
+        {
+            sb.Append("  (--weights lists every entry; --json carries all of them for scripts)\n");
+        }
+    }
+
+    private static void Rows(TextTable table, int count, bool all, Action<int> row)
+    {
+        const int Each = 3;
+        for (var k = 0; k < count; k++)
+        {
+            if (!all && count > 2 * Each && k >= Each && k < count - Each)
+            {
+                if (k == Each)
+                {
+                    table.Add("...", "", "", "");
+                }
+
+                continue;
+            }
+
+            row(k);
+        }
+    }
+
     public static void Write(Utf8JsonWriter w, DesignResult r)
     {
-        if (Of(r) is not var (real, d))
+        if (r.TwoStage is not { Real: var real, Quantised: var d })
         {
             return;
         }

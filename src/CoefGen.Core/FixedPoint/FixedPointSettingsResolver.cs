@@ -78,10 +78,24 @@ public static class FixedPointSettingsResolver
                 $"{f} fractional bits; allowed: 0..{outputBits - 1} (below the output width)", "fixed_point.output_frac_bits");
         }
 
-        if (count > p.MaxCoefficients)
+        // Repeated reads: with form = "two-stage" the target stores a per-read table and the read weights, not the full table.
+        var reads = description.Timing.Cycle?.RepeatCount ?? 1;
+        var perRead = (count + reads - 1) / reads;
+        if (description.Weights.Form == WeightsForm.TwoStage && reads >= 2)
         {
+            if (Math.Max(perRead, reads) > p.MaxCoefficients)
+            {
+                bag.Error(FixedPointCodes.TooManyCoefficients, description.LocationOf("weights.form"),
+                    $"the two-stage tables hold {perRead} per-read coefficients and {reads} read weights, but '{p.Name}' stores at most {p.MaxCoefficients} coefficients per table; use fewer samples per read or fewer reads", "weights.form");
+            }
+        }
+        else if (count > p.MaxCoefficients)
+        {
+            var twoStage = reads >= 2 && count % reads == 0 && Math.Max(perRead, reads) <= p.MaxCoefficients
+                ? $"; or set [weights] form = \"two-stage\": its per-read table of {perRead} coefficients and {reads} read weights fit"
+                : "";
             bag.Error(FixedPointCodes.TooManyCoefficients, description.LocationOf("timing.signal"),
-                $"{count} weighted samples, but '{p.Name}' stores at most {p.MaxCoefficients} coefficients; use {count - p.MaxCoefficients} samples fewer", "timing");
+                $"{count} weighted samples, but '{p.Name}' stores at most {p.MaxCoefficients} coefficients; use {count - p.MaxCoefficients} samples fewer{twoStage}", "timing");
         }
 
         var normalize = Mode(spec.Normalize, ModeNames.ParseNormalize, ModeNames.NormalizeNames, p.Normalize, "normalize", At, bag);

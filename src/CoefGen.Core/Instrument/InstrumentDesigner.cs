@@ -63,6 +63,12 @@ public static class InstrumentDesigner
             try
             {
                 var result = DesignPipeline.Run(load.Description, catalog, frequencyCheck);
+                if (result.IsTwoStage)
+                {
+                    throw new InputException(Diagnostic.Error(TwoStageCodes.FullTableOnly, load.Description.LocationOf("weights.form"),
+                        "an instrument shares one full-table datapath across its tables, so it takes form = \"full\" only; remove form = \"two-stage\"", "weights.form"));
+                }
+
                 var table = new InstrumentTable(first.Count, m, c, mode.Name, channel.Name, text, result);
                 first.Add(table);
                 found.Add((table, [.. loadProblems, .. result.Warnings.Select(relocate.Apply)]));

@@ -46,9 +46,19 @@ public static class DesignFiniteness
             }
         }
 
-        var i = r.Datapath;
-        yield return ("gain error", i.GainErrorPpm);
-        yield return ("noise penalty", i.NoisePenaltyPercent);
-        yield return ("predicted output noise", i.PredictedNoiseOutputLsb);
+        if (r.HasFullDatapath)
+        {
+            var i = r.Datapath;
+            yield return ("gain error", i.GainErrorPpm);
+            yield return ("noise penalty", i.NoisePenaltyPercent);
+            yield return ("predicted output noise", i.PredictedNoiseOutputLsb);
+        }
+
+        if (r.TwoStage is { } two)
+        {
+            yield return ("two-stage variance", two.Real.VarianceV2);
+            yield return ("two-stage gain error", two.Quantised.GainErrorPpm);
+            yield return ("two-stage noise penalty", two.Quantised.NoisePenaltyPercent);
+        }
     }
 }

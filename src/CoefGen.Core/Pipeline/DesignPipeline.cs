@@ -43,6 +43,12 @@ public static class DesignPipeline
 
         var noise = NoiseModel.FromDescription(description);
         var covariance = CycleNoise.WithShot(noise.Sample(grid), grid, description);
+        var twoStageErrors = TwoStageStage.Check(description, grid, covariance);
+        if (twoStageErrors.Count > 0)
+        {
+            throw new InputException(twoStageErrors);
+        }
+
         var solver = OptimalSolverSelection.For(grid.Count, stationary: covariance.Shot is null);
         var weights = SolveWeights(description, grid, covariance, solver.Solver);
         RegretTable? regret = null;
@@ -62,7 +68,11 @@ public static class DesignPipeline
             .ToArray();
 
         var chosen = weights.First(w => w.Scheme == description.Weights.Scheme);
-        var integer = IntegerStage.Run(description, () => IntegerDesignOf(description, grid, chosen, covariance, resolution.Settings));
+        var twoStage = TwoStageStage.Run(description, grid, covariance, resolution.Settings);
+        // With form = "two-stage" the full table is not quantised: it need not fit the target, its two-stage tables must.
+        var integer = description.Weights.Form == WeightsForm.TwoStage
+            ? null
+            : IntegerStage.Run(description, () => IntegerDesignOf(description, grid, chosen, covariance, resolution.Settings));
 
         var result = new DesignResult
         {
@@ -75,6 +85,7 @@ public static class DesignPipeline
             OptimalSolver = solver.Name,
             FixedPointSettings = resolution.Settings,
             Datapath = integer,
+            TwoStage = twoStage,
             Regret = regret,
             Warnings =
             [
@@ -95,8 +106,12 @@ public static class DesignPipeline
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(settings);
-        var integer = IntegerStage.Run(result.Description, () => IntegerDesignOf(result.Description, result.Grid, result.Chosen, result.Covariance, settings));
-        return result with { FixedPointSettings = settings, Datapath = integer };
+        var d = result.Description;
+        var twoStage = TwoStageStage.Run(d, result.Grid, result.Covariance, settings);
+        var integer = d.Weights.Form == WeightsForm.TwoStage
+            ? null
+            : IntegerStage.Run(d, () => IntegerDesignOf(d, result.Grid, result.Chosen, result.Covariance, settings));
+        return result with { FixedPointSettings = settings, Datapath = integer, TwoStage = twoStage };
     }
 
     private static IntegerDesign IntegerDesignOf(ReadoutDescription d, SampleGrid grid, WeightSet chosen, SampledCovariance covariance, FixedPointSettings settings)

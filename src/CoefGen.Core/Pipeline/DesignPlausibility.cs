@@ -25,17 +25,20 @@ public static class DesignPlausibility
     /// </summary>
     public const double ShapeErrorLimit = 0.2;
 
-    public static IReadOnlyList<Diagnostic> Check(ReadoutDescription d, SampledCovariance r, IReadOnlyList<double> chosen, IntegerDesign datapath)
+    public static IReadOnlyList<Diagnostic> Check(ReadoutDescription d, SampledCovariance r, IReadOnlyList<double> chosen, IntegerDesign? datapath)
     {
         ArgumentNullException.ThrowIfNull(d);
         ArgumentNullException.ThrowIfNull(r);
         ArgumentNullException.ThrowIfNull(chosen);
-        ArgumentNullException.ThrowIfNull(datapath);
         var bag = new DiagnosticBag();
         Bandwidth(d, bag);
         NoiseSpan(d, r, bag);
         Ramp(d, bag);
-        Shape(d, chosen, datapath, bag);
+        if (datapath is not null)
+        {
+            Shape(d, chosen, datapath, bag); // form = "two-stage" has no full integer table to compare
+        }
+
         return bag.Items;
     }
 

@@ -1,3 +1,4 @@
+using System.Diagnostics.CodeAnalysis;
 using CoefGen.Core.Capture;
 using CoefGen.Core.Diagnostics;
 using CoefGen.Core.FixedPoint;
@@ -30,8 +31,34 @@ public sealed record DesignResult
 
     public required FixedPointSettings FixedPointSettings { get; init; }
 
-    /// <summary>The integer datapath of the chosen scheme.</summary>
-    public required IntegerDesign Datapath { get; init; }
+    private readonly IntegerDesign? _datapath;
+
+    /// <summary>
+    /// The integer datapath of the chosen scheme's full table (one coefficient per weighted sample). With
+    /// form = "two-stage" there is none (<see cref="TwoStage"/> is the datapath) and reading it is API misuse
+    /// (<see cref="HasFullDatapath"/> tells).
+    /// </summary>
+    [AllowNull]
+    public required IntegerDesign Datapath
+    {
+        get => _datapath ?? throw new InvalidOperationException("form = \"two-stage\": the datapath is DesignResult.TwoStage");
+        init => _datapath = value;
+    }
+
+    /// <summary>False with form = "two-stage": the full table was not quantised (it need not fit a target).</summary>
+    public bool HasFullDatapath => _datapath is not null;
+
+    /// <summary>
+    /// The two-stage form of repeated identical reads (real and integer); null when the cycle has none. With
+    /// form = "full" it is shown beside the full table; with form = "two-stage" it is the datapath.
+    /// </summary>
+    public TwoStageDatapath? TwoStage { get; init; }
+
+    /// <summary>True when the two-stage form is the datapath (form = "two-stage").</summary>
+    public bool IsTwoStage => Description.Weights.Form == WeightsForm.TwoStage;
+
+    /// <summary>The width proof of the datapath in use: the full table's, or both stages' with form = "two-stage".</summary>
+    public WidthProof Proof => IsTwoStage ? TwoStage!.Quantised.Proof : Datapath.Proof;
 
     /// <summary>When the noise comes from a capture (noise.capture): the file and how its covariance was formed; null otherwise.</summary>
     public string? CaptureSource { get; init; }

@@ -7,7 +7,7 @@ namespace CoefGen.Core.Pipeline;
 /// <summary>Runs the integer design of a pipeline and turns "the weights do not fit the coefficient width" into a located CG2032.</summary>
 internal static class IntegerStage
 {
-    public static IntegerDesign Run(ReadoutDescription d, Func<IntegerDesign> design)
+    public static T Run<T>(ReadoutDescription d, Func<T> design)
     {
         try
         {

@@ -133,6 +133,10 @@ public static partial class ReadoutWriter
         }
 
         Line(w, "reject_drift", weights.RejectDrift ? "true" : "false");
+        if (weights.Form == WeightsForm.TwoStage)
+        {
+            Line(w, "form", Str("two-stage"));
+        }
     }
 
     /// <summary>Every scenario as an explicit case (ranges expanded, the nominal one written as a case without overrides).</summary>

@@ -13,4 +13,8 @@ public sealed record WeightsSpec(
     int RampSamples,
     IReadOnlyList<double>? ExplicitReset,
     IReadOnlyList<double>? ExplicitSignal,
-    bool RejectDrift);
+    bool RejectDrift)
+{
+    /// <summary>The datapath of the chosen weights: one full table (default) or the two-stage form of repeated reads.</summary>
+    public WeightsForm Form { get; init; } = WeightsForm.Full;
+}

@@ -67,14 +67,17 @@ public sealed class DesignPoint
     {
         ArgumentNullException.ThrowIfNull(result);
         ArgumentNullException.ThrowIfNull(diagnostics);
-        var d = result.Datapath;
+        // With form = "two-stage" the datapath is the two-stage one (the full table is not quantised).
+        var (safe, gain, penalty) = result.IsTwoStage
+            ? (result.Proof.Safe, result.TwoStage!.Quantised.GainErrorPpm, result.TwoStage.Quantised.NoisePenaltyPercent)
+            : (result.Datapath.Proof.Safe, result.Datapath.GainErrorPpm, result.Datapath.NoisePenaltyPercent);
         return new PointOutcome
         {
             Schemes = [.. result.Predictions.Select(p => new SchemeNoise(p.Scheme, p.Label, p.SigmaElectrons, p.SigmaAdu, result.Regret?.Rows.First(row => row.Scheme == p.Scheme).WorstRatio))],
             Chosen = result.Description.Weights.Scheme,
-            Safe = d.Proof.Safe,
-            GainErrorPpm = d.GainErrorPpm,
-            NoisePenaltyPercent = d.NoisePenaltyPercent,
+            Safe = safe,
+            GainErrorPpm = gain,
+            NoisePenaltyPercent = penalty,
             PixelSamples = result.Description.Timing.PixelSamples,
             PixelTimeS = result.Description.Timing.PixelSamples / result.Description.Adc.RateHz,
             Diagnostics = diagnostics,

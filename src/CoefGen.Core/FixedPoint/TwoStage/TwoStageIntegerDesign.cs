@@ -6,7 +6,7 @@ namespace CoefGen.Core.FixedPoint.TwoStage;
 /// The integer two-stage datapath (README "Cycles with many windows"): per read j, acc1_j = sum_p g_p x_(j,p) at full
 /// width, then r_j = round(acc1_j / 2^Stage1Shift); acc2 = sum_j w_j r_j; out = round(acc2 / 2^Shift) saturated to OutputBits.
 /// </summary>
-/// <param name="Table">g: per-read integer table at scale 2^P1, sum g = 0 exactly (the read's reset group).</param>
+/// <param name="Table">g: per-read integer table at scale 2^P1, sum g = 0 exactly over each reset class of the read (ReadLayout.ResetClasses).</param>
 /// <param name="ReadWeights">w: integer read weights at scale 2^P2.</param>
 /// <param name="P1">Scale of g.</param>
 /// <param name="P2">Scale of w.</param>

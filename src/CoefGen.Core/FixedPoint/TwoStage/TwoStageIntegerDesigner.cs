@@ -8,7 +8,7 @@ namespace CoefGen.Core.FixedPoint.TwoStage;
 /// <summary>
 /// Real two-stage weights (a, g) to integers. g is normalised to unit gain against the read-weighted step
 /// s_eff,p = sum_j a_j s_(j,p), rounded at the largest scale 2^P1 that fits coef_bits and repaired by the quantiser's
-/// largest-remainder rule to sum g = 0 exactly (the read's reset level cancels in stage 1 alone). The read weights are
+/// largest-remainder rule to sum g = 0 exactly over each reset class of the read (ReadLayout.ResetClasses: every reset level cancels in stage 1 alone). The read weights are
 /// then renormalised against the integer table's per-read gain and rounded at the largest 2^P2 that fits coef_bits.
 /// The first sums are rounded by the smallest shift s1 that lets the second stage fit the accumulator (its noise is
 /// counted in the penalty). The output is a pure shift by P1 + P2 - s1 - F; the residual rounding of the gain is reported as a gain error. Pure.
@@ -37,7 +37,8 @@ public static class TwoStageIntegerDesigner
 
         var gain1 = two.PerReadTable.Select((v, p) => v * effective[p]).Sum();
         var gn = two.PerReadTable.Select(v => v / gain1).ToArray();
-        var (g, p1) = Round(gn, limit, zeroSum: true);
+        var classes = ReadLayout.Of(grid)?.ResetClasses ?? throw new ArgumentException("the grid is not N identical reads", nameof(grid));
+        var (g, p1) = Round(gn, limit, classes);
 
         var readGain = new double[n];
         for (var j = 0; j < n; j++)
@@ -49,7 +50,7 @@ public static class TwoStageIntegerDesigner
         }
 
         var gain2 = two.ReadWeights.Select((v, j) => v * readGain[j]).Sum();
-        var (w, p2) = Round([.. two.ReadWeights.Select(v => v / gain2)], limit, zeroSum: false);
+        var (w, p2) = Round([.. two.ReadWeights.Select(v => v / gain2)], limit, []);
 
         // The smallest stage-1 shift with which the second multiply and accumulator fit (the output shift is not yet known: 0).
         var s1 = 0;
@@ -78,8 +79,8 @@ public static class TwoStageIntegerDesigner
     private static bool Stage2Fits(WidthProof proof) =>
         proof.Checks.Where(c => c.Name.StartsWith("stage2_", StringComparison.Ordinal) && c.Required && c.Name != "stage2_coefficient").All(c => c.Fits);
 
-    /// <summary>c = round(x 2^P) at the largest P with every |c| within limit (after the sum-zero repair when asked).</summary>
-    private static (long[] C, int P) Round(double[] x, long limit, bool zeroSum)
+    /// <summary>c = round(x 2^P) at the largest P with every |c| within limit, after repairing the sum of each class in <paramref name="zeroSum"/> to 0.</summary>
+    private static (long[] C, int P) Round(double[] x, long limit, IReadOnlyList<int[]> zeroSum)
     {
         var maxAbs = x.Max(Math.Abs);
         if (!(maxAbs > 0) || x.Any(v => !double.IsFinite(v)))
@@ -87,14 +88,13 @@ public static class TwoStageIntegerDesigner
             throw new ArgumentException("two-stage weights must be finite and not all zero");
         }
 
-        var all = Enumerable.Range(0, x.Length).ToArray();
         for (var p = Math.Min(61, (int)Math.Floor(Math.Log2(limit / maxAbs)) + 1); p >= 0; p--)
         {
             var xs = x.Select(v => Math.ScaleB(v, p)).ToArray();
             var c = xs.Select(v => (long)Math.Round(v, MidpointRounding.ToEven)).ToArray();
-            if (zeroSum)
+            foreach (var members in zeroSum)
             {
-                Quantiser.FixSum(c, xs, all, 0);
+                Quantiser.FixSum(c, xs, members, 0);
             }
 
             if (c.Max(v => Math.Abs(v)) <= limit)

@@ -11,6 +11,8 @@ internal static class WeightsSectionReader
     private static readonly (string, WindowShape)[] Windows =
         [("triangle", WindowShape.Triangle), ("hann", WindowShape.Hann), ("trapezoid", WindowShape.Trapezoid), ("explicit", WindowShape.Explicit)];
 
+    private static readonly (string, WeightsForm)[] Forms = [("full", WeightsForm.Full), ("two-stage", WeightsForm.TwoStage)];
+
     private static readonly string[] ShapeKeys = ["reset", "signal"];
 
     /// <summary>The defaults when [weights] is absent: optimal, trapezoid with an automatic ramp, no drift rejection.</summary>
@@ -26,13 +28,19 @@ internal static class WeightsSectionReader
 
         var context = root.Context;
         var errorsBefore = context.ErrorCount;
-        weights.RejectUnknown("scheme", "window", "ramp_samples", "reset", "signal", "reject_drift");
+        weights.RejectUnknown("scheme", "window", "ramp_samples", "reset", "signal", "reject_drift", "form");
         var scheme = weights.Choice("scheme", Schemes);
         var window = weights.Choice("window", Windows);
         var ramp = weights.Integer("ramp_samples", required: false, 1, TimingSectionReader.MaxSamples);
         var rejectDrift = weights.Flag("reject_drift");
         var reset = weights.NumberArray("reset", PhysicalRange.ShapeWeight);
         var signal = weights.NumberArray("signal", PhysicalRange.ShapeWeight);
+        var form = weights.Choice("form", Forms);
+        if (form == WeightsForm.TwoStage)
+        {
+            TwoStageRules.Check(weights, timing, scheme ?? WeightScheme.Optimal, rejectDrift ?? false);
+        }
+
         if (window == WindowShape.Explicit && timing?.Cycle is not null)
         {
             context.Error(CycleCodes.TwoWindowOnly, weights.Entry("window")!.ValueLocation, weights.KeyPath("window"),
@@ -54,7 +62,7 @@ internal static class WeightsSectionReader
 
         return context.ErrorCount > errorsBefore
             ? null
-            : new WeightsSpec(scheme ?? WeightScheme.Optimal, window ?? WindowShape.Trapezoid, (int)(ramp ?? 0), reset, signal, rejectDrift ?? false);
+            : new WeightsSpec(scheme ?? WeightScheme.Optimal, window ?? WindowShape.Trapezoid, (int)(ramp ?? 0), reset, signal, rejectDrift ?? false) { Form = form ?? WeightsForm.Full };
     }
 
     private static void CheckShape(TableReader weights, string key, IReadOnlyList<double>? shape, int? count)

@@ -8,7 +8,13 @@ namespace CoefGen.Core.Weights.TwoStage;
 /// <param name="PerRead">m, samples per read.</param>
 /// <param name="Period">P in samples.</param>
 /// <param name="Offsets">o_p: sample offset of each per-read entry from the read's first sample.</param>
-public sealed record ReadLayout(int Reads, int PerRead, int Period, IReadOnlyList<int> Offsets)
+/// <param name="ResetClasses">
+/// The per-read entries grouped so that entries p and q share a class when they share a reset group in every read (the
+/// coarsest partition finer than every read's groups). sum g = 0 over each class makes every reset group's sum of
+/// h = a (x) g zero, whatever the pattern: group G meets read j in a union of classes, so sum_G h = sum_j a_j sum_(classes) g = 0.
+/// One class when each read has one reset (its own or one shared by several reads).
+/// </param>
+public sealed record ReadLayout(int Reads, int PerRead, int Period, IReadOnlyList<int> Offsets, IReadOnlyList<int[]> ResetClasses)
 {
     /// <summary>The layout of <paramref name="grid"/>, or null when it is not N identical reads (N >= 2, m >= 2).</summary>
     public static ReadLayout? Of(SampleGrid grid)
@@ -60,6 +66,28 @@ public sealed record ReadLayout(int Reads, int PerRead, int Period, IReadOnlyLis
             }
         }
 
-        return new ReadLayout(reads, m, period, offsets);
+        return new ReadLayout(reads, m, period, offsets, Classes(grid.Group, reads, m));
+    }
+
+    private static int[][] Classes(IReadOnlyList<int> group, int reads, int m)
+    {
+        // Key of entry p: its group in every read; equal keys = one class. Classes in order of their first entry.
+        var classes = new List<List<int>>();
+        var keys = new List<int[]>();
+        for (var p = 0; p < m; p++)
+        {
+            var key = Enumerable.Range(0, reads).Select(j => group[(j * m) + p]).ToArray();
+            var c = keys.FindIndex(k => k.AsSpan().SequenceEqual(key));
+            if (c < 0)
+            {
+                keys.Add(key);
+                classes.Add([]);
+                c = classes.Count - 1;
+            }
+
+            classes[c].Add(p);
+        }
+
+        return [.. classes.Select(c => c.ToArray())];
     }
 }

@@ -6,7 +6,7 @@ namespace CoefGen.Core.Weights.TwoStage;
 /// The two-stage form of repeated reads that hardware builds with one short table and a second multiply
 /// (PHYSICS.md §4b): h = a (x) g. The variance is bilinear, so a and g are designed jointly by alternating two small
 /// generalised least-squares problems, each of which cannot increase the variance: g for fixed a with
-/// C_g = (a (x) I)^T R (a (x) I) under sum g = 0 and sum_j a_j g^T s_j = 1; a for fixed g with
+/// C_g = (a (x) I)^T R (a (x) I) under sum g = 0 per reset class (ReadLayout.ResetClasses) and sum_j a_j g^T s_j = 1; a for fixed g with
 /// C_a = (I (x) g)^T R (I (x) g) under sum_j a_j g^T s_j = 1. It starts from a uniform a. With stationary noise on
 /// identical reads R's block between reads j and l depends on j - l only (T_d), so C_g = sum_d c_d T_d with
 /// c_d = sum_l a_(l+d) a_l and C_a is Toeplitz: O(N m^2) per step instead of O(N^2 m^2). The result lies between the
@@ -45,7 +45,7 @@ public static class TwoStageWeights
         var iterations = 0;
         for (; iterations < MaxIterations; iterations++)
         {
-            g = SolveTable(blocks, step, a, m);
+            g = SolveTable(blocks, step, a, layout.ResetClasses, m);
             a = SolveReadWeights(blocks, step, g, n);
             var h = Expand(a, g);
             var v = r.QuadraticForm(h);
@@ -98,7 +98,7 @@ public static class TwoStageWeights
         return blocks;
     }
 
-    private static double[] SolveTable(double[][] blocks, double[][] step, double[] a, int m)
+    private static double[] SolveTable(double[][] blocks, double[][] step, double[] a, IReadOnlyList<int[]> classes, int m)
     {
         var n = a.Length;
         var c = new double[m * m];
@@ -120,7 +120,17 @@ public static class TwoStageWeights
             }
         }
 
-        var ones = Enumerable.Repeat(1.0, m).ToArray();
+        // sum g = 0 over each reset class (ReadLayout.ResetClasses): every reset group's offset cancels.
+        var offsets = classes.Select(c =>
+        {
+            var ones = new double[m];
+            foreach (var p in c)
+            {
+                ones[p] = 1.0;
+            }
+
+            return ones;
+        }).ToList();
         var gain = new double[m];
         for (var j = 0; j < n; j++)
         {
@@ -130,7 +140,7 @@ public static class TwoStageWeights
             }
         }
 
-        return DenseNullSpaceSolver.SolveOnMatrix(ConstraintSystem.Of([ones, gain], [0.0, 1.0]), c);
+        return DenseNullSpaceSolver.SolveOnMatrix(ConstraintSystem.Of([.. offsets, gain], [.. offsets.Select(_ => 0.0), 1.0]), c);
     }
 
     private static double[] SolveReadWeights(double[][] blocks, double[][] step, double[] g, int n)
