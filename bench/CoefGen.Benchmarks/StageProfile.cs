@@ -46,6 +46,16 @@ public static class StageProfile
         Lap("3 predictions");
         var two = TwoStageWeights.Design(grid, cov, d.Weights.RejectDrift);
         Lap($"two-stage ({two?.Iterations})");
+        var settings = CoefGen.Core.FixedPoint.FixedPointSettingsResolver.Resolve(d, RepoFiles.Targets()).Settings!;
+        Lap("settings");
+        if (two is not null)
+        {
+            CoefGen.Core.FixedPoint.TwoStage.TwoStageIntegerDesigner.Design(grid, cov, two, d.Adc, settings);
+            Lap("two-stage integer design");
+        }
+
+        DesignPipeline.Run(d, RepoFiles.Targets());
+        Lap("whole DesignPipeline.Run");
         Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"var optimal {sol.VarianceV2:E6} two-stage {two?.VarianceV2:E6} boxcar {cov.QuadraticForm(box.H):E6}"));
     }
 }
