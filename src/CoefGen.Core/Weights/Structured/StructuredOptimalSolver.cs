@@ -73,7 +73,6 @@ public static class StructuredOptimalSolver
             throw new ArgumentException("tolerance must be > 0 and the iteration cap >= 0");
         }
 
-        var n = r.Count;
         var positions = Positions(r.SampleIndex);
         var lag = SpanLags(r.TotalLag, positions[^1] + 1, projector.ContainsOnes());
         var op = new SymmetricToeplitzOperator(lag, positions, r.DigitalVarianceV2);
@@ -111,9 +110,7 @@ public static class StructuredOptimalSolver
 
         projector.Restore(x);
         var residual = pcg.TrueResidual(x);
-        var rx = new double[n];
-        op.Apply(x, rx);
-        var variance = ConstraintProjector.Dot(x, rx);
+        var variance = ConstraintProjector.Dot(x, pcg.LastProduct); // R x of the residual just computed
         if (failure is null && residual > relativeTolerance)
         {
             failure = string.Create(CultureInfo.InvariantCulture, $"relative residual {residual:G3} above {relativeTolerance:G3}");
