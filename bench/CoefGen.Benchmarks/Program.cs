@@ -17,7 +17,7 @@ using CoefGen.Core.Weights.Structured;
 //   design             BenchmarkDotNet: the whole DesignPipeline.Run of each shipped example and of a 2x4096 readout
 MathNet.Numerics.Control.UseManaged();
 var mode = args.Length > 0 ? args[0] : "bench";
-var sizes = mode == "stages" ? [] : args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).ToArray();
+var sizes = mode is "stages" or "vectors-profile" ? [] : args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).ToArray();
 switch (mode)
 {
     case "bench":
@@ -115,6 +115,10 @@ switch (mode)
 
     case "fft":
         FftProbe.Run(sizes[0], sizes[1]);
+        break;
+
+    case "vectors-profile":
+        VectorProfile.Run(args[1], int.Parse(args[2], CultureInfo.InvariantCulture));
         break;
 
     case "stages":
