@@ -11,6 +11,7 @@ public class CycleCommandTests
     [InlineData("fowler_ir.toml", "2 windows in 1 reset group")]
     [InlineData("up_the_ramp.toml", "32 windows in 1 reset group, 32 repeated reads")]
     [InlineData("cms_rows.toml", "8 windows in 4 reset groups, 4 repeated reads")]
+    [InlineData("skipper_two_stage.toml", "400 windows in 200 reset groups, 200 repeated reads")]
     public void Design_of_each_cycle_example_lists_its_windows_and_a_safe_proof(string example, string cycleLine)
     {
         var r = CliRunner.Run("design", Cycle(example));

@@ -50,4 +50,63 @@ public class TwoStageCommandTests
         Assert.Equal(2, r.ExitCode);
         Assert.Contains("error CG1274: weights.form", r.Error, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Emit_writes_the_two_stage_templates_and_refuses_a_full_table_template_for_a_two_stage_design()
+    {
+        var path = TwoStageSkipper();
+        var outDir = Path.Combine(Path.GetDirectoryName(path)!, "out");
+        var r = CliRunner.Run("emit", path, "--out", outDir, "--format", "two-stage-c-header", "--format", "two-stage-vhdl-package");
+        Assert.True(r.ExitCode == 0, r.Error);
+        var header = File.ReadAllText(Path.Combine(outDir, "skipper_ch0_two_stage.h"));
+        Assert.Contains("#define SKIPPER_CH0_READ_COUNT 64", header, StringComparison.Ordinal);
+        Assert.Contains("static inline int64_t skipper_ch0_apply(const int32_t *codes)", header, StringComparison.Ordinal);
+        Assert.True(File.Exists(Path.Combine(outDir, "skipper_ch0_two_stage_pkg.vhd")));
+
+        var wrong = CliRunner.Run("emit", path, "--out", Path.Combine(outDir, "x"), "--format", "c-header");
+        Assert.Equal(2, wrong.ExitCode);
+        Assert.Contains("CG3103", wrong.Error, StringComparison.Ordinal);
+        Assert.False(Directory.Exists(Path.Combine(outDir, "x")));
+
+        var full = CliRunner.Run("emit", RepoPaths.Example(Path.Combine("cycles", "skipper_reads.toml")), "--out", Path.Combine(outDir, "y"), "--format", "two-stage-c-header");
+        Assert.Equal(2, full.ExitCode);
+        Assert.Contains("need form = \"two-stage\"", full.Error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Report_has_the_two_stage_section_and_every_number_in_it_equals_design_json()
+    {
+        var path = TwoStageSkipper();
+        var html = Study.ReportCommandTests.ReportOf(path, out var dir);
+        Assert.Contains("<h2>Two-stage datapath</h2>", html, StringComparison.Ordinal);
+        Assert.Contains("Proven safe: the two-stage integer datapath", html, StringComparison.Ordinal);
+        Assert.DoesNotContain("<h2>Integer datapath</h2>", html, StringComparison.Ordinal);
+        Assert.Contains("data-json=\"two_stage.integer.proof.checks[5].required_bits\"", html, StringComparison.Ordinal);
+        using var json = JsonDocument.Parse(CliRunner.Run("design", path, "--json").Output);
+        Study.ReportCommandTests.AssertEveryKeyedCellEquals(json, html, File.ReadAllText(Path.Combine(dir, "report.md")));
+        Study.ReportCommandTests.AssertNoENotation(html);
+    }
+
+    [Fact]
+    public void Vectors_of_a_two_stage_design_verify_against_their_own_expected_outputs_and_catch_a_wrong_pixel()
+    {
+        var path = TwoStageSkipper();
+        var dir = Path.Combine(Path.GetDirectoryName(path)!, "vectors");
+        var r = CliRunner.Run("vectors", path, "--out", dir, "--pixels", "30");
+        Assert.True(r.ExitCode == 0, r.Error);
+        Assert.True(File.Exists(Path.Combine(dir, "skipper_ch0_datapath.v")));
+        Assert.Equal(30, File.ReadAllLines(Path.Combine(dir, "expected_read_sums.txt")).Length);
+        using (var manifest = JsonDocument.Parse(File.ReadAllText(Path.Combine(dir, "manifest.json"))))
+        {
+            Assert.Equal("two-stage", manifest.RootElement.GetProperty("form").GetString());
+        }
+
+        var good = CliRunner.Run("verify", path, "--vectors", dir, "--dut", Path.Combine(dir, "expected_out.hex"));
+        Assert.True(good.ExitCode == 0, good.Output + good.Error);
+        var lines = File.ReadAllLines(Path.Combine(dir, "expected_out.hex"));
+        lines[12] = lines[12] == "00000000" ? "00000001" : "00000000";
+        var dump = Path.Combine(Path.GetDirectoryName(path)!, "bad.hex");
+        File.WriteAllLines(dump, lines);
+        Assert.Equal(1, CliRunner.Run("verify", path, "--vectors", dir, "--dut", dump).ExitCode);
+    }
 }

@@ -8,19 +8,43 @@ namespace CoefGen.Cli.Commands;
 /// <summary>Turns a design into rendered artefacts: the readout's [[emit]] entries, or ad-hoc --format / --template ones.</summary>
 internal static class ArtefactPlan
 {
-    public static Provenance ProvenanceOf(DesignResult r) => new(
-        ToolInfo.Name,
-        ToolInfo.Version,
-        Path.GetFileName(r.Description.SourcePath),
-        r.Description.ContentSha256,
-        r.ChosenPrediction.Label,
-        r.ChosenPrediction.SigmaElectrons,
-        r.ChosenPrediction.SigmaAdu);
+    public static Provenance ProvenanceOf(DesignResult r)
+    {
+        if (r.IsTwoStage)
+        {
+            // The emitted weights are the two-stage ones: their own noise, not the full optimum's.
+            var sigmaV = Math.Sqrt(r.TwoStage!.Real.VarianceV2);
+            return new(ToolInfo.Name, ToolInfo.Version, Path.GetFileName(r.Description.SourcePath), r.Description.ContentSha256,
+                r.ChosenPrediction.Label + " two-stage", sigmaV / r.Description.Sensor.VoltsAtAdcPerElectron, sigmaV / r.Description.Adc.LsbV);
+        }
+
+        return new(
+            ToolInfo.Name,
+            ToolInfo.Version,
+            Path.GetFileName(r.Description.SourcePath),
+            r.Description.ContentSha256,
+            r.ChosenPrediction.Label,
+            r.ChosenPrediction.SigmaElectrons,
+            r.ChosenPrediction.SigmaAdu);
+    }
+
+    /// <summary>The template model of the design's datapath: the full table's, or the two-stage one with form = "two-stage".</summary>
+    public static TemplateModel ModelOf(DesignResult r)
+    {
+        if (!r.IsTwoStage)
+        {
+            return TemplateModel.Create(r.Datapath, ProvenanceOf(r));
+        }
+
+        var two = r.TwoStage!;
+        return TwoStageTemplateModel.Create(r.Description.Name, two.Quantised, two.Layout, r.FixedPointSettings, r.Description.Timing.PixelSamples,
+            r.Grid.SampleIndex[0], ProvenanceOf(r));
+    }
 
     /// <summary>Entries to render: explicit formats and template override the file's [[emit]] list.</summary>
     public static IReadOnlyList<(string Template, string OutputPath)> Entries(DesignResult r, IReadOnlyList<string> formats, string? template, string? templateOut)
     {
-        var prefix = IdentifierPrefix.FromName(r.Datapath.Name);
+        var prefix = IdentifierPrefix.FromName(r.Description.Name);
         var list = new List<(string, string)>();
         foreach (var f in formats)
         {
@@ -72,9 +96,20 @@ internal static class ArtefactPlan
         {
             if (!BuiltinTemplates.TryGet(template, out _) && !Path.IsPathRooted(template) && !template.Contains('.', StringComparison.Ordinal))
             {
-                var known = string.Join(", ", BuiltinTemplates.All.Select(t => t.Name));
+                var known = string.Join(", ", (r.IsTwoStage ? BuiltinTemplates.TwoStage : BuiltinTemplates.All).Select(t => t.Name));
                 DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG3102", r.Description.LocationOf("emit"),
                     $"'{template}' is neither a built-in template ({known}) nor a template file path")]);
+                return null;
+            }
+
+            // A built-in template is written for one datapath: the full table's fields are not in the two-stage model and back.
+            if (BuiltinTemplates.TryGet(template, out _) && BuiltinTemplates.IsTwoStage(template) != r.IsTwoStage)
+            {
+                var fit = string.Join(", ", (r.IsTwoStage ? BuiltinTemplates.TwoStage : BuiltinTemplates.All).Select(t => t.Name));
+                var why = r.IsTwoStage
+                    ? $"'{template}' writes a full coefficient table, but this file sets form = \"two-stage\" (the full table is not quantised)"
+                    : $"'{template}' writes the two-stage tables, which need form = \"two-stage\" in [weights]";
+                DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG3103", TemplateLocation(r, template), $"{why}; built-in templates for this design: {fit}")]);
                 return null;
             }
         }
@@ -90,7 +125,7 @@ internal static class ArtefactPlan
             return null;
         }
 
-        var model = TemplateModel.Create(r.Datapath, ProvenanceOf(r));
+        var model = ModelOf(r);
         var result = ArtefactRenderer.RenderAll(model, entries, ResourceLocator.TemplatesDir, userBase);
         if (!result.Succeeded)
         {

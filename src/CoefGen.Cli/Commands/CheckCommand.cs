@@ -28,7 +28,7 @@ internal static class CheckCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null || TwoStageRefusal.Refuse(result, "check", error))
+            if (result is null)
             {
                 return ExitCodes.BadInput;
             }

@@ -35,7 +35,7 @@ internal static class EmitCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null || TwoStageRefusal.Refuse(result, "emit", error))
+            if (result is null)
             {
                 return ExitCodes.BadInput;
             }

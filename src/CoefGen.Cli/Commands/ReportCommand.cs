@@ -36,7 +36,7 @@ internal static class ReportCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null || TwoStageRefusal.Refuse(result, "report", error))
+            if (result is null)
             {
                 return ExitCodes.BadInput;
             }

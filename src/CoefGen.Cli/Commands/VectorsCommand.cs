@@ -3,6 +3,7 @@ using CoefGen.Cli.Io;
 using CoefGen.Core.Diagnostics;
 using CoefGen.Core.Emit;
 using CoefGen.Core.Vectors;
+using CoefGen.Core.Vectors.TwoStage;
 
 namespace CoefGen.Cli.Commands;
 
@@ -40,12 +41,12 @@ internal static class VectorsCommand
             }
 
             var result = DesignRunner.TryRun(path, error);
-            if (result is null || TwoStageRefusal.Refuse(result, "vectors", error))
+            if (result is null)
             {
                 return ExitCodes.BadInput;
             }
 
-            if (!result.Datapath.Proof.Safe)
+            if (!result.Proof.Safe)
             {
                 // Vectors of an unsafe design are still useful (they exercise overflow in the DUT); say so plainly.
                 DiagnosticPrinter.Print(error, [UnsafeDesign.Describe(result, asError: false)]);
@@ -54,8 +55,11 @@ internal static class VectorsCommand
             var files = new List<(string Name, byte[] Bytes)>();
             if (!parse.GetValue(noRtl))
             {
-                var entries = ReferenceTemplates.Packages.Select(p => (p, BuiltinTemplates.TryGet(p, out var b) ? b.DefaultOutputName(Prefix(result)) : p))
-                    .Concat(ReferenceTemplates.Files.Select(f => (Path.Combine(ResourceLocator.TemplatesDir, f.FileName), Prefix(result) + f.OutputSuffix)))
+                var (packages, references) = result.IsTwoStage
+                    ? (ReferenceTemplates.TwoStagePackages, ReferenceTemplates.TwoStageFiles)
+                    : (ReferenceTemplates.Packages, ReferenceTemplates.Files);
+                var entries = packages.Select(p => (p, BuiltinTemplates.TryGet(p, out var b) ? b.DefaultOutputName(Prefix(result)) : p))
+                    .Concat(references.Select(f => (Path.Combine(ResourceLocator.TemplatesDir, f.FileName), Prefix(result) + f.OutputSuffix)))
                     .ToList();
                 var artefacts = ArtefactPlan.Render(result, entries, error);
                 if (artefacts is null)
@@ -66,7 +70,9 @@ internal static class VectorsCommand
                 files.AddRange(artefacts.Select(a => (a.RelativePath, a.ToBytes())));
             }
 
-            var source = GoldenVectorGenerator.Source(result, result.Datapath, new VectorOptions(n, parse.GetValue(seed)));
+            var options = new VectorOptions(n, parse.GetValue(seed));
+            var source = result.IsTwoStage ? null : GoldenVectorGenerator.Source(result, result.Datapath, options);
+            var twoStage = result.IsTwoStage ? TwoStageVectorGenerator.Source(result, options) : null;
             var dir = parse.GetRequiredValue(outDir).FullName;
             using var batch = new OutputBatch();
             foreach (var (name, bytes) in files)
@@ -81,11 +87,20 @@ internal static class VectorsCommand
                 var progress = Console.IsErrorRedirected ? null : new PixelProgress(error, n);
                 try
                 {
-                    VectorFileWriter.Write(source, name =>
+                    Stream Open(string name)
                     {
                         written++;
                         return new FileStream(Path.Combine(stage.Folder, name), FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16);
-                    }, ToolInfo.Name, ToolInfo.Version, progress, alongside: files);
+                    }
+
+                    if (twoStage is not null)
+                    {
+                        TwoStageVectorFileWriter.Write(twoStage, Open, ToolInfo.Name, ToolInfo.Version, alongside: files);
+                    }
+                    else
+                    {
+                        VectorFileWriter.Write(source!, Open, ToolInfo.Name, ToolInfo.Version, progress, alongside: files);
+                    }
                 }
                 catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
                 {
@@ -100,18 +115,18 @@ internal static class VectorsCommand
                 return ExitCodes.BadInput;
             }
 
-            if (source.SamplerNote is string note)
+            if ((source?.SamplerNote ?? twoStage!.SamplerNote) is string note)
             {
                 DiagnosticPrinter.Print(error, [Diagnostic.Warning(VectorCodes.EmbeddingClipped, SourceLocation.FileOnly(path), note)]);
             }
 
-            var kinds = source.UnreachedBranches.Count;
-            output.WriteLine($"wrote {written} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {n} pixels, seed {source.Seed}" +
+            var kinds = source?.UnreachedBranches.Count ?? 0;
+            output.WriteLine($"wrote {written} files to {Path.GetRelativePath(Directory.GetCurrentDirectory(), dir)}: {n} pixels, seed {options.Seed}" +
                 (kinds == 0 ? "" : $"; {kinds} mode-separating targets unreachable (manifest: unreached_branches)"));
             return ExitCodes.Ok;
         });
         return cmd;
     }
 
-    private static string Prefix(Core.Pipeline.DesignResult r) => TemplateModel.Create(r.Datapath, ArtefactPlan.ProvenanceOf(r)).Prefix;
+    private static string Prefix(Core.Pipeline.DesignResult r) => IdentifierPrefix.FromName(r.Description.Name);
 }

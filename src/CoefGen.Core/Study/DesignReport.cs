@@ -27,8 +27,9 @@ public static class DesignReport
         (r, _) => ReportCharts.Spectra(r),
         (r, _) => ReportCharts.Contribution(r),
         (r, _) => Budget(r),
-        (r, _) => Datapath(r),
-        (r, _) => Proof(r),
+        (r, _) => r.IsTwoStage ? null : Datapath(r),
+        (r, _) => r.IsTwoStage ? null : Proof(r),
+        (r, _) => TwoStageReportSection.For(r),
         (r, _) => CrossCheck(r),
         (r, _) => Warnings(r),
         (r, c) => Emitted(r, c.Emitted),
@@ -48,14 +49,15 @@ public static class DesignReport
     private static ReportSection Status(DesignResult r, ReportContext context)
     {
         var p = r.ChosenPrediction;
-        var proof = r.Datapath.Proof;
+        var proof = r.Proof;
+        var datapath = r.IsTwoStage ? "two-stage integer datapath" : "integer datapath";
         var banner = proof.Safe
-            ? new ReportBlock { Banner = $"Proven safe: the integer datapath of the {SchemeWords[(int)r.Chosen.Scheme]} weights cannot overflow for any input inside the ADC range." }
+            ? new ReportBlock { Banner = $"Proven safe: the {datapath} of the {SchemeWords[(int)r.Chosen.Scheme]} weights cannot overflow for any input inside the ADC range." }
             : new ReportBlock
             {
                 Banner = "NOT SAFE: the integer datapath can overflow for inputs inside the ADC range (" +
                     string.Join("; ", proof.Checks.Where(c => c.Required && !c.Fits).Select(c => $"{CheckLabel.Of(c.Name)} needs {I(c.RequiredBits)} bits, has {I(c.AvailableBits)}")) +
-                    "). `coefgen emit` refuses to write its files; see \"Fixed-point proof\" for what to change.",
+                    $"). `coefgen emit` refuses to write its files; see \"{(r.IsTwoStage ? "Two-stage datapath" : "Fixed-point proof")}\" for what to change.",
                 Alarm = true,
             };
         var rows = new List<IReadOnlyList<ReportCell>>

@@ -4,18 +4,28 @@ using CoefGen.Core.Readout;
 namespace CoefGen.Core.Vectors;
 
 /// <summary>Builds the codes of one pixel cycle: levels in ADU, the ideal ADC's quantisation and clipping, the readout's coding.</summary>
-internal sealed class CycleShape(IntegerDesign design, AdcSpec adc, double baselineAdu, IReadOnlyList<double> step)
+/// <param name="pixelSamples">Samples in the cycle.</param>
+/// <param name="sampleIndex">Cycle sample of each weight, time order.</param>
+/// <param name="weights">The integer weight of each of them (only its sign is used, to put the window extremes).</param>
+/// <param name="twoWindow">The classic reset and signal windows, or null for a general cycle.</param>
+/// <param name="adc">The ADC.</param>
+/// <param name="baselineAdu">DC level.</param>
+/// <param name="step">Step response at every cycle sample.</param>
+internal sealed class CycleShape(int pixelSamples, IReadOnlyList<int> sampleIndex, IReadOnlyList<long> weights, (SampleWindow Reset, SampleWindow Signal)? twoWindow,
+    AdcSpec adc, double baselineAdu, IReadOnlyList<double> step)
 {
-    private readonly bool[] _weighted = WeightedMask(design);
+    private readonly bool[] _weighted = WeightedMask(pixelSamples, sampleIndex);
 
-    public IntegerDesign Design => design;
+    /// <summary>The shape of a one-stage integer design's cycle.</summary>
+    public static CycleShape Of(IntegerDesign design, AdcSpec adc, double baselineAdu, IReadOnlyList<double> step) =>
+        new(design.PixelSamples, design.SampleIndex, design.Coefficients, design.Windows is null ? (design.Reset, design.Signal) : null, adc, baselineAdu, step);
 
     /// <summary>Bottom and top rail as the ADC writes them.</summary>
     public long Low => ToCode(adc.MinCode);
 
     public long High => ToCode(adc.MaxCode);
 
-    public long[] Fill(Func<int, long> code) => [.. Enumerable.Range(0, design.PixelSamples).Select(code)];
+    public long[] Fill(Func<int, long> code) => [.. Enumerable.Range(0, pixelSamples).Select(code)];
 
     /// <summary>Noise-free cycle with charge q (ADU).</summary>
     public long[] Clean(double chargeAdu) => Fill(k => Quantise(Level(k, chargeAdu)));
@@ -27,18 +37,18 @@ internal sealed class CycleShape(IntegerDesign design, AdcSpec adc, double basel
     public long[] Windows(long reset, long signal)
     {
         var baseline = Quantise(baselineAdu);
-        if (design.Windows is not null)
+        if (twoWindow is not var (resetWindow, signalWindow))
         {
             var codes = Fill(_ => baseline);
-            for (var i = 0; i < design.SampleIndex.Count; i++)
+            for (var i = 0; i < sampleIndex.Count; i++)
             {
-                codes[design.SampleIndex[i]] = design.Coefficients[i] < 0 ? reset : signal;
+                codes[sampleIndex[i]] = weights[i] < 0 ? reset : signal;
             }
 
             return codes;
         }
 
-        return Fill(k => design.Reset.Contains(k) ? reset : design.Signal.Contains(k) ? signal : baseline);
+        return Fill(k => resetWindow.Contains(k) ? reset : signalWindow.Contains(k) ? signal : baseline);
     }
 
     /// <summary>Weighted samples at the baseline, the others alternating between the rails.</summary>
@@ -54,7 +64,7 @@ internal sealed class CycleShape(IntegerDesign design, AdcSpec adc, double basel
         var codes = Clean(0.0);
         for (var i = 0; i < weightedCodes.Count; i++)
         {
-            codes[design.SampleIndex[i]] = weightedCodes[i];
+            codes[sampleIndex[i]] = weightedCodes[i];
         }
 
         return codes;
@@ -64,9 +74,9 @@ internal sealed class CycleShape(IntegerDesign design, AdcSpec adc, double basel
     public long[] Noisy(double chargeAdu, double[] analogNoiseV, Xoshiro256StarStar rng)
     {
         var codes = Clean(chargeAdu);
-        for (var i = 0; i < design.SampleIndex.Count; i++)
+        for (var i = 0; i < sampleIndex.Count; i++)
         {
-            var k = design.SampleIndex[i];
+            var k = sampleIndex[i];
             var adcNoise = adc.NoiseLsb > 0 ? adc.NoiseLsb * rng.NextGaussian() : 0.0;
             codes[k] = Quantise(Level(k, chargeAdu) + (analogNoiseV[i] / adc.LsbV) + adcNoise);
         }
@@ -86,10 +96,10 @@ internal sealed class CycleShape(IntegerDesign design, AdcSpec adc, double basel
 
     private long ToCode(long signed) => BitExactModel.ToCode(signed, adc.Bits, adc.Coding);
 
-    private static bool[] WeightedMask(IntegerDesign d)
+    private static bool[] WeightedMask(int pixelSamples, IReadOnlyList<int> sampleIndex)
     {
-        var mask = new bool[d.PixelSamples];
-        foreach (var k in d.SampleIndex)
+        var mask = new bool[pixelSamples];
+        foreach (var k in sampleIndex)
         {
             mask[k] = true;
         }

@@ -7,4 +7,8 @@ namespace CoefGen.Core.Vectors;
 /// <param name="ChargeAdu">Charge step at the ADC input in ADU (settled level minus baseline).</param>
 /// <param name="Codes">Every sample of the cycle as the ADC writes it (PixelSamples codes, the readout's coding).</param>
 /// <param name="Expected">The bit-exact model's accumulator and output for these codes.</param>
-public sealed record GoldenPixel(string Kind, double ChargeAdu, IReadOnlyList<long> Codes, BitExactResult Expected);
+public sealed record GoldenPixel(string Kind, double ChargeAdu, IReadOnlyList<long> Codes, BitExactResult Expected)
+{
+    /// <summary>Two-stage datapath only: the rounded first sum r_j of every read (the intermediate between the stages); null otherwise.</summary>
+    public IReadOnlyList<long>? ReadSums { get; init; }
+}

@@ -55,21 +55,14 @@ public static class GoldenVectorGenerator
         }
 
         var adc = d.Adc;
-        var span = Math.Pow(2, adc.Bits);
-        var baseline = adc.MinCode + (BaselineSpanFraction * span) + BaselineFractionAdu;
+        var baseline = BaselineOf(adc);
         var fullCharge = adc.MaxCode - baseline;
         var step = CycleStep(d);
-        // A capture's covariance, or the model's by dense Cholesky up to its limit (exact, unchanged results); above
-        // it circulant embedding of the stationary model covariance.
-        IAnalogNoiseSampler sampler = result.CaptureCovariance is { } measured
-            ? CorrelatedNoiseSampler.FromCaptureCovariance(measured.Matrix, measured.Count, result.Noise.DigitalVarianceV2)
-            : result.Covariance.Count <= CorrelatedNoiseSampler.MaxSamples
-                ? CorrelatedNoiseSampler.Create(result.Covariance, result.Noise)
-                : CirculantNoiseSampler.Create(result.Covariance, result.Noise, d.Adc.RateHz);
-        var shape = new CycleShape(design, adc, baseline, step);
+        var sampler = SamplerFor(result);
+        var shape = CycleShape.Of(design, adc, baseline, step);
         var baselineSample = BitExactModel.ToSample(shape.Clean(0.0)[design.SampleIndex[0]], adc.Bits, adc.Coding);
         var (targeted, unreached) = BranchPixels.Build(design, baselineSample);
-        var edges = EdgeCases(shape).Concat(targeted.Select(t => (t.Kind, 0.0, shape.WithWeighted(t.Weighted)))).ToList();
+        var edges = EdgeCases(shape, design).Concat(targeted.Select(t => (t.Kind, 0.0, shape.WithWeighted(t.Weighted)))).ToList();
         var info = new VectorInfo
         {
             Design = design,
@@ -100,20 +93,36 @@ public static class GoldenVectorGenerator
         var noise = new double[sampler.Count];
         for (var j = 0; j < options.Pixels - edges.Count; j++)
         {
-            var (kind, charge) = (j % 10) switch
-            {
-                4 => (PixelKind.ChargeMid, fullCharge / 2),
-                9 => (PixelKind.ChargeFull, fullCharge),
-                _ => (PixelKind.Noise, 0.0),
-            };
+            var (kind, charge) = Ladder(j, fullCharge);
             sampler.Sample(rng, noise);
             shot?.AddDraw(rng.NextGaussian, noise);
             yield return Pixel(kind, charge, shape.Noisy(charge, noise, rng));
         }
     }
 
+    /// <summary>The DC level of every pixel (ADU): an eighth of the span above the bottom rail plus a fraction.</summary>
+    internal static double BaselineOf(AdcSpec adc) => adc.MinCode + (BaselineSpanFraction * Math.Pow(2, adc.Bits)) + BaselineFractionAdu;
+
+    /// <summary>
+    /// A capture's covariance, or the model's by dense Cholesky up to its limit (exact, unchanged results); above it
+    /// circulant embedding of the stationary model covariance.
+    /// </summary>
+    internal static IAnalogNoiseSampler SamplerFor(DesignResult result) => result.CaptureCovariance is { } measured
+        ? CorrelatedNoiseSampler.FromCaptureCovariance(measured.Matrix, measured.Count, result.Noise.DigitalVarianceV2)
+        : result.Covariance.Count <= CorrelatedNoiseSampler.MaxSamples
+            ? CorrelatedNoiseSampler.Create(result.Covariance, result.Noise)
+            : CirculantNoiseSampler.Create(result.Covariance, result.Noise, result.Description.Adc.RateHz);
+
+    /// <summary>The pixel kind and charge of the j-th ladder pixel after the edge cases: eight noise pixels, one mid-scale, one full-scale.</summary>
+    internal static (string Kind, double Charge) Ladder(int j, double fullCharge) => (j % 10) switch
+    {
+        4 => (PixelKind.ChargeMid, fullCharge / 2),
+        9 => (PixelKind.ChargeFull, fullCharge),
+        _ => (PixelKind.Noise, 0.0),
+    };
+
     /// <summary>The step response s_k at every sample of the cycle, by the same formula as the weights' grid.</summary>
-    private static IReadOnlyList<double> CycleStep(ReadoutDescription d)
+    internal static IReadOnlyList<double> CycleStep(ReadoutDescription d)
     {
         var t = d.Timing;
         if (t.Cycle is not null)
@@ -130,7 +139,8 @@ public static class GoldenVectorGenerator
         return SampleGrid.Create(d.Adc.RateHz, new SampleWindow(0, 1), new SampleWindow(1, t.PixelSamples - 1), t.TransferTimeS, pole).Step;
     }
 
-    private static IEnumerable<(string Kind, double Charge, long[] Codes)> EdgeCases(CycleShape s)
+    /// <summary>The edge cases that do not depend on the arithmetic: DC offset, rails, window extremes, alternation, rails outside the windows.</summary>
+    internal static IEnumerable<(string Kind, double Charge, long[] Codes)> StimulusEdges(CycleShape s)
     {
         yield return (PixelKind.DcOffset, 0.0, s.Clean(0.0));
         yield return (PixelKind.RailsLow, 0.0, s.Fill(_ => s.Low));
@@ -140,11 +150,20 @@ public static class GoldenVectorGenerator
         yield return (PixelKind.Alternating, 0.0, s.Fill(i => i % 2 == 0 ? s.Low : s.High));
         yield return (PixelKind.AlternatingInverted, 0.0, s.Fill(i => i % 2 == 0 ? s.High : s.Low));
         yield return (PixelKind.OutsideWindowsRails, 0.0, s.OutsideRails());
+    }
 
+    private static IEnumerable<(string Kind, double Charge, long[] Codes)> EdgeCases(CycleShape s, IntegerDesign design)
+    {
+        return StimulusEdges(s).Concat(WorstCases(s, design.Proof, design.Coefficients.Count));
+    }
+
+    /// <summary>One pixel per distinct worst case of the proof (the codes of its weighted samples, the baseline elsewhere).</summary>
+    internal static IEnumerable<(string Kind, double Charge, long[] Codes)> WorstCases(CycleShape s, WidthProof proof, int weighted)
+    {
         var seen = new List<long[]>();
-        foreach (var check in s.Design.Proof.Checks)
+        foreach (var check in proof.Checks)
         {
-            if (check.WorstCaseCodes is { } w && w.Count == s.Design.Coefficients.Count)
+            if (check.WorstCaseCodes is { } w && w.Count == weighted)
             {
                 var codes = s.WithWeighted(w);
                 if (!seen.Any(c => c.SequenceEqual(codes)))

@@ -24,4 +24,14 @@ public static class ReferenceTemplates
         ("ref-pipeline-tb.vhd.scriban", "_pipeline_tb.vhd"),
         ("ref-coefs.hex.scriban", "_coefs.hex"),
     ];
+
+    /// <summary>With form = "two-stage": the two-stage packages (the Verilog datapath includes the Verilog one).</summary>
+    public static IReadOnlyList<string> TwoStagePackages { get; } = ["two-stage-verilog-include", "two-stage-c-header", "two-stage-vhdl-package", "two-stage-sv-package"];
+
+    /// <summary>With form = "two-stage": the two-stage Verilog datapath and the (shared) self-checking Verilog testbench.</summary>
+    public static IReadOnlyList<(string FileName, string OutputSuffix)> TwoStageFiles { get; } =
+    [
+        ("ref-two-stage-datapath.v.scriban", "_datapath.v"),
+        ("ref-tb.v.scriban", "_tb.v"),
+    ];
 }

@@ -28,14 +28,18 @@ public class CycleExampleTests
 
         Assert.True(r.Predictions[^1].VarianceV2 <= r.Predictions.Min(p => p.VarianceV2) * (1 + 1e-9));
 
-        // Offset rejection is exact in integers for each reset group (every reset has its own kTC level).
-        var c = r.Datapath.Coefficients;
+        // Offset rejection is exact in integers for each reset group (every reset has its own kTC level); with form = "two-stage"
+        // the integers applied to each sample are w_j g_p.
+        var c = r.IsTwoStage
+            ? [.. Enumerable.Range(0, r.Grid.Count).Select(k => r.TwoStage!.Quantised.ReadWeights[k / r.TwoStage.Layout.PerRead] * r.TwoStage.Quantised.Table[k % r.TwoStage.Layout.PerRead])]
+            : r.Datapath.Coefficients;
         foreach (var group in r.Grid.GroupMembers())
         {
             Assert.Equal(0L, group.Sum(k => c[k]));
         }
 
-        Assert.True(r.Datapath.Proof.Safe);
+        Assert.True(r.Proof.Safe);
+        Assert.Equal(d.Weights.Form == WeightsForm.TwoStage, !r.HasFullDatapath);
         var shot = d.Timing.Cycle!.ShotNoise is { TotalEPerS: > 0 };
         Assert.Equal(shot, r.ChosenPrediction.Budget.Any(b => b.Source == "shot noise"));
         if (shot)

@@ -70,7 +70,7 @@ public class TwoStageIntegerTests
                 .Select(c => r.Description.Adc.Coding == Core.Readout.AdcCoding.OffsetBinary ? c : c - (1L << (d.AdcBits - 1)))
                 .ToArray();
             var run = TwoStageBitExactModel.Run(d, codes, r.FixedPointSettings.Accumulator);
-            Assert.Equal(Reference(d, codes), (BigInteger)run.Output);
+            Assert.Equal(TwoStageCases.Reference(d, codes), (BigInteger)run.Output);
         }
     }
 
@@ -81,52 +81,5 @@ public class TwoStageIntegerTests
         Assert.Equal(18, r.FixedPointSettings.CoefBits);
         Assert.InRange(d.NoisePenaltyPercent, -0.01, 0.01);
         Assert.InRange(Math.Abs(d.GainErrorPpm), 0, 1);
-    }
-
-    /// <summary>
-    /// The datapath written out with BigInteger and floor division (no Int128, no shared helpers), exact when the proof
-    /// is safe (no wrap or saturation inside; the output saturates).
-    /// </summary>
-    private static BigInteger Reference(TwoStageIntegerDesign d, long[] codes)
-    {
-        var m = d.Table.Count;
-        BigInteger acc2 = 0;
-        for (var j = 0; j < d.ReadWeights.Count; j++)
-        {
-            BigInteger acc1 = 0;
-            for (var p = 0; p < m; p++)
-            {
-                var x = (BigInteger)codes[(j * m) + p] - (d.Coding == Core.Readout.AdcCoding.OffsetBinary ? BigInteger.One << (d.AdcBits - 1) : 0);
-                acc1 += d.Table[p] * x;
-            }
-
-            acc2 += d.ReadWeights[j] * Round(acc1, d.Stage1Shift, d.Rounding);
-        }
-
-        var outMax = (BigInteger.One << (d.OutputBits - 1)) - 1;
-        return BigInteger.Clamp(Round(acc2, d.Shift, d.Rounding), -outMax - 1, outMax);
-    }
-
-    private static BigInteger Round(BigInteger v, int shift, RoundingMode mode)
-    {
-        if (shift == 0)
-        {
-            return v;
-        }
-
-        var den = BigInteger.One << shift;
-        var floor = BigInteger.DivRem(v, den, out var rem);
-        if (rem < 0)
-        {
-            floor -= 1;
-            rem += den;
-        }
-
-        return mode switch
-        {
-            RoundingMode.Truncate => floor,
-            RoundingMode.HalfUp => 2 * rem >= den ? floor + 1 : floor,
-            _ => 2 * rem > den || (2 * rem == den && !floor.IsEven) ? floor + 1 : floor,
-        };
     }
 }
