@@ -10,7 +10,7 @@ public class SmokeTests
     {
         var g = SampleGrid.Create(1e6, new SampleWindow(2, 3), new SampleWindow(8, 4), 6e-6, null);
         Assert.Equal(7, g.Count);
-        Assert.Equal(3, g.ResetCount);
+        Assert.Equal(3, g.Windows[0].Count);
         Assert.True(g.IsSettled);
         Assert.Equal(8, g.SampleIndex[3]);
     }

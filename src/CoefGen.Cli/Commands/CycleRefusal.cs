@@ -14,7 +14,7 @@ internal static class CycleRefusal
     /// <summary>True (after printing CG1255) when <paramref name="d"/> has a general cycle.</summary>
     public static bool Refuse(ReadoutDescription d, string what, TextWriter error)
     {
-        if (d.Timing.Cycle is null)
+        if (d.Timing.Cycle.IsClassic)
         {
             return false;
         }

@@ -80,8 +80,12 @@ internal static class DesignJson
         w.WriteNumber("pixel_samples", t.PixelSamples);
         w.WriteNumber("transfer_time_s", t.TransferTimeS);
         w.WriteString("step", t.Step == StepModel.Pole ? "pole" : "ideal");
-        Window(w, "reset", t.Reset);
-        Window(w, "signal", t.Signal);
+        if (t.Cycle.AsTwoWindow() is { } classic)
+        {
+            Window(w, "reset", classic.Reset);
+            Window(w, "signal", classic.Signal);
+        }
+
         w.WriteStartArray("rounding");
         foreach (var line in t.Rounding)
         {
@@ -89,7 +93,7 @@ internal static class DesignJson
         }
 
         w.WriteEndArray();
-        if (t.Cycle is not null)
+        if (!t.Cycle.IsClassic)
         {
             CycleJson.Write(w, t.Cycle);
         }
@@ -152,12 +156,16 @@ internal static class DesignJson
     {
         var g = r.Grid;
         w.WriteStartObject("samples");
-        w.WriteNumber("reset_count", g.ResetCount);
-        w.WriteNumber("signal_count", g.SignalCount);
+        if (g.TwoWindow is { } classic)
+        {
+            w.WriteNumber("reset_count", classic.Reset.Count);
+            w.WriteNumber("signal_count", classic.Signal.Count);
+        }
+
         Numbers(w, "index", g.SampleIndex.Select(i => (double)i), integers: true);
         Numbers(w, "time_s", g.TimeS);
         Numbers(w, "step", g.Step);
-        if (g.IsCycle)
+        if (g.TwoWindow is null)
         {
             Numbers(w, "group", g.Group.Select(x => (double)x), integers: true);
         }

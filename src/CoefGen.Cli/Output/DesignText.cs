@@ -39,15 +39,15 @@ internal static class DesignText
         sb.Append("Readout\n");
         sb.Append($"  ADC       {a.Bits} bits at {Eng.SiShort(a.RateHz, "S/s")}, {Eng.NumShort(a.FullScaleV)} V span (LSB {Eng.SiShort(a.LsbV, "V")}), {CodingWord(a.Coding)}, own noise {Eng.NumShort(a.NoiseLsb)} LSB rms\n");
         sb.Append($"  sensor    {Eng.NumShort(d.Sensor.ConversionGainUvPerE)} uV/e- x gain {Eng.NumShort(d.Sensor.Gain)} = {Eng.SiShort(d.Sensor.VoltsAtAdcPerElectron, "V")}/e- at the ADC\n");
-        if (t.Cycle is not null)
+        if (t.Cycle.AsTwoWindow() is not { } classic)
         {
             CycleText.AppendWindows(sb, d, t.Cycle);
         }
         else
         {
             sb.Append($"  cycle     {t.PixelSamples} samples ({Eng.SiShort(t.PixelSamples / a.RateHz, "s")}), transfer at {Eng.SiShort(t.TransferTimeS, "s")}, step {StepWord(d)}\n");
-            sb.Append($"  reset     samples {t.Reset.Start}..{t.Reset.End - 1} ({t.Reset.Count}, {Eng.SiShort(t.Reset.Count / a.RateHz, "s")})\n");
-            sb.Append($"  signal    samples {t.Signal.Start}..{t.Signal.End - 1} ({t.Signal.Count}, {Eng.SiShort(t.Signal.Count / a.RateHz, "s")})\n");
+            sb.Append($"  reset     samples {classic.Reset.Start}..{classic.Reset.End - 1} ({classic.Reset.Count}, {Eng.SiShort(classic.Reset.Count / a.RateHz, "s")})\n");
+            sb.Append($"  signal    samples {classic.Signal.Start}..{classic.Signal.End - 1} ({classic.Signal.Count}, {Eng.SiShort(classic.Signal.Count / a.RateHz, "s")})\n");
         }
 
         foreach (var line in t.Rounding)

@@ -1,6 +1,7 @@
 using System.Text;
 using CoefGen.Core.FixedPoint;
 using CoefGen.Core.Pipeline;
+using CoefGen.Core.Readout;
 
 namespace CoefGen.Cli.Output;
 
@@ -16,14 +17,15 @@ internal static class FixedPointText
         var post = i.Normalize == NormalizeMode.Shift ? "" : $" x {i.PostMultiplier} ({i.PostMultiplierBits} bits)";
         sb.Append($"  output       acc{post} >> {i.Shift}, rounding {DesignText.RoundingWord(i.Rounding)}, saturated to {i.OutputBits} bits with {i.OutputFracBits} fractional bits (1 output LSB = 2^-{i.OutputFracBits} ADU)\n");
         sb.Append($"  gain error   {Eng.Num(i.GainErrorPpm, 4)} ppm;  integer noise penalty {Eng.Num(i.NoisePenaltyPercent, 3)} %;  predicted output noise {Eng.Num(i.PredictedNoiseOutputLsb)} output LSB rms\n");
-        if (r.Grid.IsCycle && i.Normalize == NormalizeMode.Shift && Math.Abs(i.GainErrorPpm) >= 1)
+        var g = r.Grid;
+        if (g.Windows.Any(w => w.Sees == ChargeSight.Ramp) && i.Normalize == NormalizeMode.Shift && Math.Abs(i.GainErrorPpm) >= 1)
         {
-            sb.Append("  note         with several windows the integer sums are pinned per reset group (sum c = 0), not the gain, so the gain error is that of rounding; " +
+            sb.Append("  note         ramp windows: the gain sum c s = sum c (t - t0) / T_ref is not a sum of pinned integer counts (only sum c = 0 per reset group is), so the gain error is that of rounding; " +
                 "normalize = \"exact\" corrects it with a post-multiplier\n");
         }
         else if (i.Normalize == NormalizeMode.Shift && Math.Abs(i.GainErrorPpm) >= 1)
         {
-            var least = Enumerable.Range(r.Grid.ResetCount, r.Grid.SignalCount).Min(k => r.Grid.Step[k]);
+            var least = Enumerable.Range(0, g.Count).Where(k => g.SightOf(k) == ChargeSight.Transfer).Min(k => g.Step[k]);
             sb.Append($"  note         the gain error comes from partial settling (smallest signal-window step response {Eng.Num(least, 6)}); " +
                 "normalize = \"exact\" corrects it with a post-multiplier, a later signal window removes it\n");
         }

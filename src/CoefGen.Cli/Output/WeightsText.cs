@@ -16,7 +16,7 @@ internal static class WeightsText
         sb.Append($"Weights of {r.Chosen.Label} (h: real, unit gain to charge; c: integer, h ~ c / 2^{r.Datapath.P})\n");
         var table = new TextTable("sample", "t", "s", "h", "c");
         void Row(int k) => table.Add(Eng.Int(g.SampleIndex[k]), Eng.Si(g.TimeS[k], "s"), Eng.Num(g.Step[k], 6), Eng.Num(h[k], 6), Eng.Int(c[k]));
-        var runs = g.IsCycle ? CycleRuns(g, all) : [(0, g.ResetCount), (g.ResetCount, g.SignalCount)];
+        var runs = g.TwoWindow is null ? CycleRuns(g, all) : [.. g.Windows.Select(w => (w.First, w.Count))];
         foreach (var (start, count) in runs)
         {
             for (var k = start; k < start + count; k++)

@@ -20,8 +20,8 @@ internal static class CycleModel
         Set(g, "last_sample", d.SampleIndex[^1]);
         var windows = d.Windows ??
         [
-            new Weights.GridWindow(0, d.Reset.Count, ChargeSight.None, 0, 0),
-            new Weights.GridWindow(d.Reset.Count, d.Signal.Count, ChargeSight.Transfer, 0, 0),
+            new Weights.GridWindow(0, d.Reset!.Count, ChargeSight.None, 0, 0),
+            new Weights.GridWindow(d.Reset.Count, d.Signal!.Count, ChargeSight.Transfer, 0, 0),
         ];
         Set(g, "window_count", windows.Count);
         Set(g, "windows", windows.Select(w => Window(d, w)).ToArray());

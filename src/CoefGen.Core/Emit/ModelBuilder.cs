@@ -22,6 +22,22 @@ internal static class ModelBuilder
 
     public static void Set(ScriptObject target, string key, object value) => target.SetValue(key, value, readOnly: true);
 
+    /// <summary>The name and provenance fields every model carries.</summary>
+    public static void Names(ScriptObject g, string name, string prefix, Provenance provenance)
+    {
+        Set(g, "name", ModelText.CommentSafe(name));
+        Set(g, "prefix", prefix);
+        Set(g, "prefix_upper", prefix.ToUpperInvariant());
+        Set(g, "tool_name", ModelText.CommentSafe(provenance.ToolName));
+        Set(g, "tool_version", ModelText.CommentSafe(provenance.ToolVersion));
+        Set(g, "readout_file", ModelText.CommentSafe(provenance.ReadoutFileName));
+        Set(g, "readout_sha256", ModelText.CommentSafe(provenance.ReadoutSha256));
+        Set(g, "scheme", ModelText.CommentSafe(provenance.SchemeLabel));
+        // Comments show people 4 significant figures: a last-digit difference between machines must not change a file.
+        Set(g, "noise_e", Formatting.Human.NumShort(provenance.PredictedReadNoiseElectrons));
+        Set(g, "noise_adu", Formatting.Human.NumShort(provenance.PredictedReadNoiseAdu));
+    }
+
     public static ScriptObject Proof(WidthProof proof)
     {
         var checks = new List<ScriptObject>();
@@ -71,6 +87,17 @@ internal static class ModelBuilder
         Set(g, "accumulator", ModelText.Word(accumulator));
         Set(g, "saturate", accumulator == AccumulatorMode.Saturate);
         Set(g, "normalize", ModelText.Word(normalize));
+    }
+
+    /// <summary>The ADC coding word and flag and the offset subtracted from offset-binary codes.</summary>
+    public static void Coding(ScriptObject g, Readout.AdcCoding coding, int adcBits)
+    {
+        Set(g, "coding", ModelText.Word(coding));
+        var offsetBinary = coding == Readout.AdcCoding.OffsetBinary;
+        Set(g, "offset_binary", offsetBinary);
+        var adcOffset = offsetBinary ? 1L << (adcBits - 1) : 0L;
+        Set(g, "adc_offset", adcOffset);
+        Set(g, "adc_offset_c", LiteralFormat.C(adcOffset, wide: false));
     }
 
     /// <summary>Smallest and largest value of a signed word of <paramref name="bits"/> bits.</summary>

@@ -42,23 +42,18 @@ public sealed class TemplateModel
         var d = design;
         var g = new ScriptObject();
         var prefix = IdentifierPrefix.FromName(d.Name);
-        Set(g, "name", ModelText.CommentSafe(d.Name));
-        Set(g, "prefix", prefix);
-        Set(g, "prefix_upper", prefix.ToUpperInvariant());
-        Set(g, "tool_name", ModelText.CommentSafe(provenance.ToolName));
-        Set(g, "tool_version", ModelText.CommentSafe(provenance.ToolVersion));
-        Set(g, "readout_file", ModelText.CommentSafe(provenance.ReadoutFileName));
-        Set(g, "readout_sha256", ModelText.CommentSafe(provenance.ReadoutSha256));
-        Set(g, "scheme", ModelText.CommentSafe(provenance.SchemeLabel));
-        // Comments show people 4 significant figures: a last-digit difference between machines must not change a file.
-        Set(g, "noise_e", Formatting.Human.NumShort(provenance.PredictedReadNoiseElectrons));
-        Set(g, "noise_adu", Formatting.Human.NumShort(provenance.PredictedReadNoiseAdu));
+        Names(g, d.Name, prefix, provenance);
 
         Set(g, "pixel_samples", d.PixelSamples);
-        Set(g, "reset_start", d.Reset.Start);
-        Set(g, "reset_count", d.Reset.Count);
-        Set(g, "signal_start", d.Signal.Start);
-        Set(g, "signal_count", d.Signal.Count);
+        if (d.Reset is { } reset && d.Signal is { } signal)
+        {
+            // The classic design's RESET_/SIGNAL_ constants; a general cycle has its window table instead (CycleModel).
+            Set(g, "reset_start", reset.Start);
+            Set(g, "reset_count", reset.Count);
+            Set(g, "signal_start", signal.Start);
+            Set(g, "signal_count", signal.Count);
+        }
+
         Set(g, "coef_count", d.Coefficients.Count);
         Set(g, "sample_index", Array(d.SampleIndex));
         Set(g, "last_index", d.Coefficients.Count - 1);
@@ -99,12 +94,7 @@ public sealed class TemplateModel
         Set(g, "rounding_constant_fits_int32", rc <= int.MaxValue);
 
         Modes(g, d.Rounding, d.Accumulator, d.Normalize);
-        Set(g, "coding", ModelText.Word(d.Coding));
-        var offsetBinary = d.Coding == AdcCoding.OffsetBinary;
-        Set(g, "offset_binary", offsetBinary);
-        var adcOffset = offsetBinary ? 1L << (d.AdcBits - 1) : 0L;
-        Set(g, "adc_offset", adcOffset);
-        Set(g, "adc_offset_c", LiteralFormat.C(adcOffset, wide: false));
+        Coding(g, d.Coding, d.AdcBits);
 
         Ranges(g, d);
         Set(g, "proof", Proof(d.Proof));
@@ -145,7 +135,7 @@ public sealed class TemplateModel
     private static void Validate(IntegerDesign d)
     {
         var n = d.Coefficients.Count;
-        var windowed = d.Windows is null ? d.Reset.Count + d.Signal.Count : d.Windows.Sum(w => w.Count);
+        var windowed = d.Windows?.Sum(w => w.Count) ?? (d.Reset?.Count ?? 0) + (d.Signal?.Count ?? 0);
         if (n == 0 || d.SampleIndex.Count != n || windowed != n)
         {
             throw new ArgumentException("coefficients, sample indices and window counts disagree", nameof(d));

@@ -31,16 +31,7 @@ public static class TwoStageTemplateModel
         Validate(d, layout, settings, pixelSamples, firstSample);
         var g = new ScriptObject();
         var prefix = IdentifierPrefix.FromName(name);
-        Set(g, "name", ModelText.CommentSafe(name));
-        Set(g, "prefix", prefix);
-        Set(g, "prefix_upper", prefix.ToUpperInvariant());
-        Set(g, "tool_name", ModelText.CommentSafe(provenance.ToolName));
-        Set(g, "tool_version", ModelText.CommentSafe(provenance.ToolVersion));
-        Set(g, "readout_file", ModelText.CommentSafe(provenance.ReadoutFileName));
-        Set(g, "readout_sha256", ModelText.CommentSafe(provenance.ReadoutSha256));
-        Set(g, "scheme", ModelText.CommentSafe(provenance.SchemeLabel));
-        Set(g, "noise_e", Formatting.Human.NumShort(provenance.PredictedReadNoiseElectrons));
-        Set(g, "noise_adu", Formatting.Human.NumShort(provenance.PredictedReadNoiseAdu));
+        Names(g, name, prefix, provenance);
 
         Set(g, "pixel_samples", pixelSamples);
         Set(g, "read_count", layout.Reads);
@@ -76,12 +67,7 @@ public static class TwoStageTemplateModel
         Set(g, "output_frac_bits", d.OutputFracBits);
 
         Modes(g, d.Rounding, settings.Accumulator, NormalizeMode.Shift);
-        Set(g, "coding", ModelText.Word(d.Coding));
-        var offsetBinary = d.Coding == AdcCoding.OffsetBinary;
-        Set(g, "offset_binary", offsetBinary);
-        var adcOffset = offsetBinary ? 1L << (d.AdcBits - 1) : 0L;
-        Set(g, "adc_offset", adcOffset);
-        Set(g, "adc_offset_c", LiteralFormat.C(adcOffset, wide: false));
+        Coding(g, d.Coding, d.AdcBits);
 
         var (accMin, accMax) = SignedRange(d.AccBits);
         var (outMin, outMax) = SignedRange(d.OutputBits);

@@ -5,8 +5,8 @@ namespace CoefGen.Core.FixedPoint;
 /// <summary>
 /// With drift rejection the real weights satisfy sum h t = 0; rounding breaks it. Since t_k = n_k / rate with
 /// integer sample indices n_k, the constraint is exact in integers: sum c_k n_k = 0 (given sum c = 0). This
-/// restores it with paired moves (+1 at i, -1 at j) inside one group — a window when the window sums are
-/// pinned to +-2^P, else all samples — which keep every sum and change sum c n by n_i - n_j. Each move takes
+/// restores it with paired moves (+1 at i, -1 at j) inside one pinned set (<see cref="IntegerSumPins"/>: a reset
+/// group, or its no-charge or charge part when the gain is pinned to 2^P) which keep every sum and change sum c n by n_i - n_j. Each move takes
 /// the largest step towards zero that a pair allows, choosing the pair whose rounding went furthest the other
 /// way (the largest-remainder rule again), so the integers stay next to h 2^P.
 /// </summary>
@@ -16,8 +16,7 @@ internal static class DriftRepair
     public static bool Apply(long[] c, double[] x, SampleGrid grid, long limit, bool windowsPinned)
     {
         var n = grid.SampleIndex;
-        var all = Enumerable.Range(0, c.Length).ToArray();
-        int[][] groups = grid.IsCycle ? grid.GroupMembers() : windowsPinned ? [all[..grid.ResetCount], all[grid.ResetCount..]] : [all];
+        var groups = IntegerSumPins.Of(grid, windowsPinned, 0, x).Sets;
         var maxMoves = (4 * c.Length) + 100;
         for (var move = 0; move < maxMoves; move++)
         {

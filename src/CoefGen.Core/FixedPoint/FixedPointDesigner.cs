@@ -14,7 +14,7 @@ public static class FixedPointDesigner
     public const double OutputNoiseBudget = 0.01;
 
     public static IntegerDesign Design(string name, SampleGrid grid, IReadOnlyList<double> h, SampledCovariance r, AdcSpec adc,
-        FixedPointSettings settings, int pixelSamples, SampleWindow reset, SampleWindow signal, bool rejectDrift = false,
+        FixedPointSettings settings, int pixelSamples, bool rejectDrift = false,
         Func<IReadOnlyList<double>, double>? noiseVariance = null)
     {
         ArgumentNullException.ThrowIfNull(name);
@@ -23,11 +23,9 @@ public static class FixedPointDesigner
         ArgumentNullException.ThrowIfNull(r);
         ArgumentNullException.ThrowIfNull(adc);
         ArgumentNullException.ThrowIfNull(settings);
-        ArgumentNullException.ThrowIfNull(reset);
-        ArgumentNullException.ThrowIfNull(signal);
-        if ((!grid.IsCycle && (grid.ResetCount != reset.Count || grid.SignalCount != signal.Count)) || grid.SampleIndex[^1] >= pixelSamples)
+        if (grid.SampleIndex[^1] >= pixelSamples)
         {
-            throw new ArgumentException("grid, windows and pixel cycle disagree");
+            throw new ArgumentException("grid and pixel cycle disagree");
         }
 
         if (settings.SampleBits < adc.Bits)
@@ -56,7 +54,8 @@ public static class FixedPointDesigner
         double gainErrorPpm;
         if (powerOfTwo)
         {
-            // sum over the signal window is exactly 2^P, so out = acc / 2^(P - F) has gain 2^F per ADU exactly.
+            // The charge windows sum to exactly 2^P (IntegerSumPins), so with settled steps out = acc / 2^(P - F)
+            // has gain 2^F per ADU exactly; what is left is reported as the gain error.
             (m, shift) = f <= q.P ? (1L, q.P - f) : (1L << (f - q.P), 0);
             gainErrorPpm = (gainInt - 1) * 1e6;
         }
@@ -75,8 +74,8 @@ public static class FixedPointDesigner
             Coefficients = c,
             SampleIndex = grid.SampleIndex,
             PixelSamples = pixelSamples,
-            Reset = reset,
-            Signal = signal,
+            Reset = grid.TwoWindow?.Reset,
+            Signal = grid.TwoWindow?.Signal,
             AdcBits = adc.Bits,
             Coding = adc.Coding,
             SampleBits = settings.SampleBits,
@@ -96,7 +95,7 @@ public static class FixedPointDesigner
             GainErrorPpm = gainErrorPpm,
             NoisePenaltyPercent = 100 * ((sigmaInt / sigmaReal) - 1),
             PredictedNoiseOutputLsb = Math.Sqrt((outSigma * outSigma) + (1.0 / 12)),
-            Windows = grid.IsCycle ? grid.Windows : null,
+            Windows = grid.TwoWindow is null ? grid.Windows : null,
             GroupCount = grid.GroupCount,
             ReadCount = grid.Windows.Max(w => w.Read) + 1,
         };

@@ -12,7 +12,7 @@ public static class FixedPointSettingsResolver
         ArgumentNullException.ThrowIfNull(catalog);
         var spec = description.FixedPoint;
         var adcBits = description.Adc.Bits;
-        var count = description.Timing.CycleWindows.Sum(w => w.Samples.Count);
+        var count = description.Timing.Cycle.Windows.Sum(w => w.Samples.Count);
         var bag = new DiagnosticBag();
         SourceLocation At(string key) => description.LocationOf("fixed_point." + key);
 
@@ -79,7 +79,7 @@ public static class FixedPointSettingsResolver
         }
 
         // Repeated reads: with form = "two-stage" the target stores a per-read table and the read weights, not the full table.
-        var reads = description.Timing.Cycle?.RepeatCount ?? 1;
+        var reads = description.Timing.Cycle.RepeatCount;
         var perRead = (count + reads - 1) / reads;
         if (description.Weights.Form == WeightsForm.TwoStage && reads >= 2)
         {

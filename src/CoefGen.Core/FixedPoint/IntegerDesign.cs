@@ -24,9 +24,11 @@ public sealed record IntegerDesign
 
     public required int PixelSamples { get; init; }
 
-    public required SampleWindow Reset { get; init; }
+    /// <summary>The reset window of a classic design (<see cref="TwoWindowCycle"/>); null for a general cycle.</summary>
+    public SampleWindow? Reset { get; init; }
 
-    public required SampleWindow Signal { get; init; }
+    /// <summary>The signal window of a classic design; null for a general cycle.</summary>
+    public SampleWindow? Signal { get; init; }
 
     public required int AdcBits { get; init; }
 
@@ -77,7 +79,7 @@ public sealed record IntegerDesign
 
     /// <summary>
     /// The windows of a general cycle as runs of coefficients, in time order; null for a classic two-window design
-    /// (then <see cref="Reset"/> and <see cref="Signal"/> are its windows; for a general cycle they are the first and last).
+    /// (then <see cref="Reset"/> and <see cref="Signal"/> are its windows; for a general cycle they are null).
     /// </summary>
     public IReadOnlyList<CoefGen.Core.Weights.GridWindow>? Windows { get; init; }
 

@@ -5,8 +5,8 @@ namespace CoefGen.Core.FixedPoint;
 
 /// <summary>
 /// Real weights to integers: c = round(h 2^P) with P as large as the coefficient width allows, repaired by the
-/// largest-remainder rule (PHYSICS.md §6) so that sum c = 0 exactly and, for a power-of-two gain, the signal
-/// window sums to 2^P; then refined by pairwise +-1 moves that keep those sums, keep every c_k at floor or ceil
+/// largest-remainder rule (PHYSICS.md §6) so that sum c = 0 exactly per reset group and, for a power-of-two gain,
+/// the charge windows sum to 2^P (<see cref="IntegerSumPins"/>); then refined by pairwise +-1 moves that keep those sums, keep every c_k at floor or ceil
 /// of h_k 2^P, and lower the noise c^T R c / (sum c s)^2.
 /// </summary>
 internal static class Quantiser
@@ -75,25 +75,10 @@ internal static class Quantiser
         var scale = Math.ScaleB(1.0, p);
         var xs = hn.Select(v => v * scale).ToArray();
         var c = xs.Select(v => (long)Math.Round(v, MidpointRounding.ToEven)).ToArray();
-        var all = Enumerable.Range(0, c.Length).ToArray();
-        if (grid.IsCycle)
+        var (sets, targets) = IntegerSumPins.Of(grid, powerOfTwoGain, p, xs);
+        for (var i = 0; i < sets.Length; i++)
         {
-            // A general cycle: sum c = 0 over every reset group; the gain is realised (and reported) as it rounds.
-            foreach (var group in grid.GroupMembers())
-            {
-                FixSum(c, xs, group, 0);
-            }
-        }
-        else if (powerOfTwoGain)
-        {
-            var reset = all[..grid.ResetCount];
-            var signal = all[grid.ResetCount..];
-            FixSum(c, xs, reset, -(1L << p));
-            FixSum(c, xs, signal, 1L << p);
-        }
-        else
-        {
-            FixSum(c, xs, all, 0);
+            FixSum(c, xs, sets[i], targets?[i] ?? 0);
         }
 
         x = xs;
@@ -140,8 +125,7 @@ internal static class Quantiser
             hi[k] = Math.Min(limit, Math.Max(c[k], (long)Math.Ceiling(x[k])));
         }
 
-        var all = Enumerable.Range(0, n).ToArray();
-        int[][] windows = grid.IsCycle ? grid.GroupMembers() : powerOfTwoGain ? [all[..grid.ResetCount], all[grid.ResetCount..]] : [all];
+        var windows = IntegerSumPins.Of(grid, powerOfTwoGain, 0, x).Sets;
         var state = new RefinementState(c, grid.Step, r);
         var cap = (4 * n) + 100;
         var moves = 0;

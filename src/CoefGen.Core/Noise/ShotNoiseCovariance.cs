@@ -29,7 +29,7 @@ public sealed class ShotNoiseCovariance
     {
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(sensor);
-        if (grid.ExposureS is null || !grid.ExposureS.Any(double.IsFinite))
+        if (!grid.ExposureS.Any(double.IsFinite))
         {
             return null;
         }

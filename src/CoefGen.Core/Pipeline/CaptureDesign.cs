@@ -31,7 +31,7 @@ public static class CaptureDesign
         var chosen = weights.First(w => w.Scheme == d.Weights.Scheme);
         var t = d.Timing;
         var datapath = IntegerStage.Run(d, () => FixedPointDesigner.Design(
-            d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, t.Reset, t.Signal, d.Weights.RejectDrift,
+            d.Name, model.Grid, chosen.H, model.Covariance, d.Adc, model.FixedPointSettings, t.PixelSamples, d.Weights.RejectDrift,
             covariance.QuadraticForm));
         var result = model with
         {

@@ -12,7 +12,7 @@ public static class CycleNoise
         ArgumentNullException.ThrowIfNull(covariance);
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(d);
-        var shot = d.Timing.Cycle?.ShotNoise;
+        var shot = d.Timing.Cycle.ShotNoise;
         if (shot is null || !(shot.TotalEPerS > 0))
         {
             return covariance;

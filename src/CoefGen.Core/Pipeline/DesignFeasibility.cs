@@ -16,23 +16,24 @@ internal static class DesignFeasibility
     public static IReadOnlyList<Diagnostic> Check(ReadoutDescription d, SampleGrid grid)
     {
         var bag = new DiagnosticBag();
-        if (grid.IsCycle)
+        if (grid.TwoWindow is not { } classic)
         {
             CycleFeasibility.Check(d, grid, bag);
             return bag.Items;
         }
 
+        // The classic file's own diagnostics (located at its [timing.reset] / [timing.signal] keys).
         var meanReset = 0.0;
         var meanSignal = 0.0;
         for (var i = 0; i < grid.Count; i++)
         {
-            if (grid.IsSignal(i))
+            if (grid.SightOf(i) == ChargeSight.Transfer)
             {
-                meanSignal += grid.Step[i] / grid.SignalCount;
+                meanSignal += grid.Step[i] / classic.Signal.Count;
             }
             else
             {
-                meanReset += grid.Step[i] / grid.ResetCount;
+                meanReset += grid.Step[i] / classic.Reset.Count;
             }
         }
 
@@ -49,7 +50,7 @@ internal static class DesignFeasibility
                 $"the reset and signal windows span {span} samples; at most {MaxSpanSamples} are supported (the covariance keeps one value per lag of the span); move the windows closer or lower adc.rate_hz");
         }
 
-        if (d.Weights.RejectDrift && (grid.ResetCount < 2 || grid.SignalCount < 2))
+        if (d.Weights.RejectDrift && (classic.Reset.Count < 2 || classic.Signal.Count < 2))
         {
             bag.Error("CG1404", d.LocationOf("weights.reject_drift"),
                 "drift rejection needs at least 2 samples in each window (offset, gain and slope are three constraints); lengthen the windows or set reject_drift = false");

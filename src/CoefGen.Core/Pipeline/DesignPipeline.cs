@@ -117,7 +117,7 @@ public static class DesignPipeline
     private static IntegerDesign IntegerDesignOf(ReadoutDescription d, SampleGrid grid, WeightSet chosen, SampledCovariance covariance, FixedPointSettings settings)
     {
         var t = d.Timing;
-        return FixedPointDesigner.Design(d.Name, grid, chosen.H, covariance, d.Adc, settings, t.PixelSamples, t.Reset, t.Signal, d.Weights.RejectDrift);
+        return FixedPointDesigner.Design(d.Name, grid, chosen.H, covariance, d.Adc, settings, t.PixelSamples, d.Weights.RejectDrift);
     }
 
     // Core does not read files: the CLI parses noise.capture and calls CaptureDesign.Apply, which drops this warning.

@@ -87,7 +87,7 @@ public static class DesignPlausibility
     private static void Ramp(ReadoutDescription d, DiagnosticBag bag)
     {
         var w = d.Weights;
-        var shortest = Math.Min(d.Timing.Reset.Count, d.Timing.Signal.Count);
+        var shortest = d.Timing.Cycle.Windows.Min(x => x.Samples.Count);
         if (w.Window == WindowShape.Trapezoid && w.RampSamples > 0 && 2L * w.RampSamples > shortest)
         {
             bag.Warning(ReadoutCodes.RampLongerThanWindow, d.LocationOf("weights.ramp_samples"),

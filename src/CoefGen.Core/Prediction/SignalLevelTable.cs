@@ -17,8 +17,8 @@ public static class SignalLevelTable
         ArgumentNullException.ThrowIfNull(covariance);
         ArgumentNullException.ThrowIfNull(d);
         ArgumentNullException.ThrowIfNull(designed);
-        var shot = d.Timing.Cycle?.ShotNoise;
-        if (shot is null || grid.ExposureS is null)
+        var shot = d.Timing.Cycle.ShotNoise;
+        if (shot is null)
         {
             return [];
         }

@@ -3,7 +3,8 @@ namespace CoefGen.Core.Readout;
 /// <summary>
 /// A general pixel cycle: every window in time order with what it sees and its reset group, plus the integration
 /// settings of ramp windows. The two-window cycle of a classic readout file is the special case
-/// [reset: no charge, group 0], [signal: after the transfer, group 0] (<see cref="TimingSpec.CycleWindows"/>).
+/// [reset: no charge, group 0], [signal: after the transfer, group 0] (<see cref="TwoWindowCycle.ToCycle()"/>);
+/// every layer that computes works on the windows and groups alone, so both forms go through one path.
 /// </summary>
 /// <param name="Windows">Windows sorted by start, disjoint, repetitions expanded.</param>
 /// <param name="GroupCount">Number of reset groups (every group 0 .. GroupCount-1 has a window).</param>
@@ -15,4 +16,17 @@ public sealed record CycleSpec(
     int GroupCount,
     double? ReferenceTimeS,
     ShotNoiseSpec? ShotNoise,
-    int RepeatCount);
+    int RepeatCount)
+{
+    /// <summary>Set only for a cycle written in the classic form; see <see cref="AsTwoWindow"/>.</summary>
+    internal TwoWindowCycle? TwoWindow { get; init; }
+
+    /// <summary>True when the file was written in the classic form ([timing.reset] and [timing.signal]).</summary>
+    public bool IsClassic => TwoWindow is not null;
+
+    /// <summary>
+    /// The reset/signal view of a classic-form cycle; null for a general cycle ([[timing.window]]), even one with
+    /// two windows, whose output lists its windows instead.
+    /// </summary>
+    public TwoWindowCycle? AsTwoWindow() => TwoWindow;
+}

@@ -59,7 +59,7 @@ public static partial class ReadoutWriter
 
     private static void WriteTiming(StringBuilder w, TimingSpec timing, double rateHz)
     {
-        if (timing.Cycle is not null)
+        if (timing.Cycle.AsTwoWindow() is not { } classic)
         {
             WriteCycle(w, timing, timing.Cycle, rateHz);
             return;
@@ -69,7 +69,7 @@ public static partial class ReadoutWriter
         Line(w, "pixel_samples", Int(timing.PixelSamples));
         Line(w, "transfer_sample", Num(TransferSample(timing.TransferTimeS, rateHz)));
         Line(w, "step", Str(timing.Step == StepModel.Pole ? "pole" : "ideal"));
-        foreach (var (name, window) in new[] { ("reset", timing.Reset), ("signal", timing.Signal) })
+        foreach (var (name, window) in new[] { ("reset", classic.Reset), ("signal", classic.Signal) })
         {
             w.Append("\n[timing.").Append(name).Append("]\n");
             Line(w, "start", Int(window.Start));

@@ -92,7 +92,7 @@ public static class DesignReport
             new[] { T("pixel cycle"), ReportCell.With("readout.timing.pixel_samples", t.PixelSamples, $"samples ({Human.SiShort(t.PixelSamples / d.Adc.RateHz, "s")})") },
         };
         var step = new[] { T("step model"), T(t.Step == StepModel.Pole ? "pole (settles through the front-end pole)" : "ideal (instant)") };
-        if (t.Cycle is not null)
+        if (t.Cycle.AsTwoWindow() is not { } classic)
         {
             rows.Add(step);
             rows.AddRange(CycleReportRows.Rows(t.Cycle));
@@ -103,10 +103,10 @@ public static class DesignReport
             [
                 new[] { T("charge transfer"), ReportCell.Si("readout.timing.transfer_time_s", t.TransferTimeS, "s") },
                 step,
-                new[] { T("reset window start"), ReportCell.With("readout.timing.reset.start", t.Reset.Start, "(sample index)") },
-                new[] { T("reset window length"), ReportCell.With("readout.timing.reset.count", t.Reset.Count, "samples") },
-                new[] { T("signal window start"), ReportCell.With("readout.timing.signal.start", t.Signal.Start, "(sample index)") },
-                new[] { T("signal window length"), ReportCell.With("readout.timing.signal.count", t.Signal.Count, "samples") },
+                new[] { T("reset window start"), ReportCell.With("readout.timing.reset.start", classic.Reset.Start, "(sample index)") },
+                new[] { T("reset window length"), ReportCell.With("readout.timing.reset.count", classic.Reset.Count, "samples") },
+                new[] { T("signal window start"), ReportCell.With("readout.timing.signal.start", classic.Signal.Start, "(sample index)") },
+                new[] { T("signal window length"), ReportCell.With("readout.timing.signal.count", classic.Signal.Count, "samples") },
             ]);
         }
 

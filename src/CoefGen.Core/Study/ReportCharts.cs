@@ -16,7 +16,7 @@ internal static class ReportCharts
         var rate = g.RateHz;
         var time = CycleReportRows.WithBreaks(g, g.TimeS); // NaN between the windows breaks each line at the gap (the weights are zero there)
         var bands = WindowBands(r);
-        ChartMarker[] markers = t.Cycle is not null ? [] : [new ChartMarker(t.TransferTimeS, $"charge transfer {Human.SiShort(t.TransferTimeS, "s")}")];
+        ChartMarker[] markers = !t.Cycle.IsClassic ? [] : [new ChartMarker(t.TransferTimeS, $"charge transfer {Human.SiShort(t.TransferTimeS, "s")}")];
         var cycle = t.PixelSamples / rate;
 
         // Both charts share the pixel-cycle time axis, the shaded windows and the transfer marker.
@@ -175,18 +175,19 @@ internal static class ReportCharts
     {
         var g = r.Grid;
         var half = 0.5 / g.RateHz;
-        if (g.IsCycle)
+        if (g.TwoWindow is not { } classic)
         {
             // A general cycle: one band over all its windows (a band per window would bury the chart for many reads).
             return [new ChartBand(g.TimeS[0] - half, g.TimeS[^1] + half, $"{Human.Whole(g.Windows.Count)} windows, {Human.Whole(g.Count)} weighted samples", "#3b6fb6")];
         }
 
-        var reset = (g.TimeS[0] - half, g.TimeS[g.ResetCount - 1] + half);
-        var signal = (g.TimeS[g.ResetCount] - half, g.TimeS[^1] + half);
+        var resetCount = classic.Reset.Count;
+        var reset = (g.TimeS[0] - half, g.TimeS[resetCount - 1] + half);
+        var signal = (g.TimeS[resetCount] - half, g.TimeS[^1] + half);
         return
         [
-            new ChartBand(reset.Item1, reset.Item2, $"reset window ({Human.Whole(g.ResetCount)})", "#3b6fb6"),
-            new ChartBand(signal.Item1, signal.Item2, $"signal window ({Human.Whole(g.SignalCount)})", "#c77d1a"),
+            new ChartBand(reset.Item1, reset.Item2, $"reset window ({Human.Whole(resetCount)})", "#3b6fb6"),
+            new ChartBand(signal.Item1, signal.Item2, $"signal window ({Human.Whole(classic.Signal.Count)})", "#c77d1a"),
         ];
     }
 

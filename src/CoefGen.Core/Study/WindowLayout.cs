@@ -26,9 +26,10 @@ public sealed record WindowLayout(int LeadSamples, int ResetCount, double Transf
     {
         ArgumentNullException.ThrowIfNull(d);
         var t = d.Timing;
-        var transfer = t.TransferTimeS * d.Adc.RateHz;
+        var c = t.Cycle.AsTwoWindow() ?? throw new ArgumentException("window layouts describe classic two-window files only (the sweep refuses a general cycle, CG1255)", nameof(d));
+        var transfer = c.TransferTimeS * d.Adc.RateHz;
         return new WindowLayout(
-            t.Reset.Start, t.Reset.Count, Math.Round(transfer - t.Reset.End, 9), Math.Round(t.Signal.Start - transfer, 9), t.Signal.Count, t.PixelSamples - t.Signal.End);
+            c.Reset.Start, c.Reset.Count, Math.Round(transfer - c.Reset.End, 9), Math.Round(c.Signal.Start - transfer, 9), c.Signal.Count, t.PixelSamples - c.Signal.End);
     }
 
     /// <summary>The readout text with this layout's timing written in samples (ns keys are replaced).</summary>

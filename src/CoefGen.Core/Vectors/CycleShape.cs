@@ -18,7 +18,7 @@ internal sealed class CycleShape(int pixelSamples, IReadOnlyList<int> sampleInde
 
     /// <summary>The shape of a one-stage integer design's cycle.</summary>
     public static CycleShape Of(IntegerDesign design, AdcSpec adc, double baselineAdu, IReadOnlyList<double> step) =>
-        new(design.PixelSamples, design.SampleIndex, design.Coefficients, design.Windows is null ? (design.Reset, design.Signal) : null, adc, baselineAdu, step);
+        new(design.PixelSamples, design.SampleIndex, design.Coefficients, design.Windows is null ? (design.Reset!, design.Signal!) : null, adc, baselineAdu, step);
 
     /// <summary>Bottom and top rail as the ADC writes them.</summary>
     public long Low => ToCode(adc.MinCode);

@@ -125,7 +125,9 @@ public static class GoldenVectorGenerator
     internal static IReadOnlyList<double> CycleStep(ReadoutDescription d)
     {
         var t = d.Timing;
-        if (t.Cycle is not null)
+        // A general cycle's waveform is its windows' steps (0 elsewhere); a classic file's is the one transfer's step
+        // at every sample of the cycle, unweighted samples included (its golden vectors are kept byte-identical).
+        if (!t.Cycle.IsClassic)
         {
             return SampleGrid.StepAtEverySample(d.Adc.RateHz, t.Cycle, t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null, t.PixelSamples);
         }

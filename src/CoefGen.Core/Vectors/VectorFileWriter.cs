@@ -41,24 +41,11 @@ public static class VectorFileWriter
         var counts = new VectorCounts();
         try
         {
-            var (stimHex, stimDec, outHex, accHex, expDec, table) = (outs[0], outs[1], outs[2], outs[3], outs[4], outs[5]);
-            table.Line("pixel,kind,charge_adu,charge_e,expected_output,expected_output_adu,expected_accumulator,accumulator_clipped,output_saturated");
-            var scale = Math.ScaleB(1.0, -d.OutputFracBits);
+            outs[5].Line(TableHeader);
             var i = 0;
             foreach (var p in vectors.Pixels)
             {
-                var e = p.Expected;
-                foreach (var c in p.Codes)
-                {
-                    stimHex.Line(VectorFiles.UnsignedHex(c, d.AdcBits));
-                }
-
-                stimDec.Line(string.Join(' ', p.Codes.Select(Dec)));
-                outHex.Line(LiteralFormat.MaskedHex(e.Output, d.OutputBits));
-                accHex.Line(LiteralFormat.MaskedHex(e.Accumulator, d.AccBits));
-                expDec.Line(Dec(e.Output) + " " + Dec(e.Accumulator));
-                table.Line(string.Create(CultureInfo.InvariantCulture,
-                    $"{i},{p.Kind},{R(p.ChargeAdu)},{R(p.ChargeAdu / vectors.AduPerElectron)},{Dec(e.Output)},{R(e.Output * scale)},{Dec(e.Accumulator)},{(e.AccumulatorClipped ? 1 : 0)},{(e.OutputSaturated ? 1 : 0)}"));
+                WritePixel(outs, i, p, d.AdcBits, d.OutputBits, d.AccBits, d.OutputFracBits, vectors.AduPerElectron);
                 counts.Add(d, p);
                 i++;
                 if (progress is not null && i % ProgressStride == 0)
@@ -73,7 +60,7 @@ public static class VectorFileWriter
                 w.Finish();
             }
 
-            var files = (alongside ?? []).Select(a => new VectorFileEntry(a.Name, LineCount(a.Bytes), Convert.ToHexStringLower(SHA256.HashData(a.Bytes))))
+            var files = (alongside ?? []).Select(a => Entry(a.Name, a.Bytes))
                 .Concat(outs.Select(w => new VectorFileEntry(w.Name, w.Lines, w.Sha256))).ToList();
             using var manifest = new HashingWriter(VectorFileNames.Manifest, open(VectorFileNames.Manifest));
             manifest.Raw(VectorManifestWriter.Text(vectors, i, counts, files, toolName, toolVersion));
@@ -87,6 +74,31 @@ public static class VectorFileWriter
             }
         }
     }
+
+    /// <summary>The header line of vectors.csv.</summary>
+    internal const string TableHeader = "pixel,kind,charge_adu,charge_e,expected_output,expected_output_adu,expected_accumulator,accumulator_clipped,output_saturated";
+
+    /// <summary>One pixel's lines in the first six data files (<see cref="DataFiles"/> order), shared with the two-stage writer.</summary>
+    internal static void WritePixel(IReadOnlyList<HashingWriter> outs, int i, GoldenPixel p, int adcBits, int outputBits, int accBits, int outputFracBits, double aduPerElectron)
+    {
+        var (stimHex, stimDec, outHex, accHex, expDec, table) = (outs[0], outs[1], outs[2], outs[3], outs[4], outs[5]);
+        var e = p.Expected;
+        foreach (var c in p.Codes)
+        {
+            stimHex.Line(VectorFiles.UnsignedHex(c, adcBits));
+        }
+
+        stimDec.Line(string.Join(' ', p.Codes.Select(Dec)));
+        outHex.Line(LiteralFormat.MaskedHex(e.Output, outputBits));
+        accHex.Line(LiteralFormat.MaskedHex(e.Accumulator, accBits));
+        expDec.Line(Dec(e.Output) + " " + Dec(e.Accumulator));
+        var scale = Math.ScaleB(1.0, -outputFracBits);
+        table.Line(string.Create(CultureInfo.InvariantCulture,
+            $"{i},{p.Kind},{R(p.ChargeAdu)},{R(p.ChargeAdu / aduPerElectron)},{Dec(e.Output)},{R(e.Output * scale)},{Dec(e.Accumulator)},{(e.AccumulatorClipped ? 1 : 0)},{(e.OutputSaturated ? 1 : 0)}"));
+    }
+
+    /// <summary>A file entry of the manifest for bytes written beside the vectors.</summary>
+    internal static VectorFileEntry Entry(string name, byte[] bytes) => new(name, LineCount(bytes), Convert.ToHexStringLower(SHA256.HashData(bytes)));
 
     private static int LineCount(byte[] bytes) => bytes.Count(b => b == (byte)'\n');
 

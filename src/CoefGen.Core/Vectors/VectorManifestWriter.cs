@@ -40,13 +40,7 @@ internal static class VectorManifestWriter
             w.WriteNumber("adu_per_electron", set.AduPerElectron);
             w.WriteNumber("noise_added_constant_v2", set.AddedConstantV2);
             w.WriteNumber("noise_diagonal_loading_v2", set.DiagonalLoadingV2);
-            w.WriteStartObject("kinds");
-            foreach (var (kind, n) in counts.Kinds)
-            {
-                w.WriteNumber(kind, n);
-            }
-
-            w.WriteEndObject();
+            Kinds(w, counts.Kinds);
             w.WriteStartObject("branches");
             foreach (var (branch, n) in counts.Branches)
             {
@@ -61,20 +55,38 @@ internal static class VectorManifestWriter
             }
 
             w.WriteEndObject();
-            w.WriteStartArray("files");
-            foreach (var f in files)
-            {
-                w.WriteStartObject();
-                w.WriteString("name", f.Name);
-                w.WriteNumber("lines", f.Lines);
-                w.WriteString("sha256", f.Sha256);
-                w.WriteEndObject();
-            }
-
-            w.WriteEndArray();
+            Files(w, files);
             w.WriteEndObject();
         }
 
         return Utf8.GetString(stream.ToArray()) + "\n";
+    }
+
+    /// <summary>The "kinds" object: pixels per kind in order of first appearance.</summary>
+    internal static void Kinds(Utf8JsonWriter w, IEnumerable<(string Kind, int Count)> kinds)
+    {
+        w.WriteStartObject("kinds");
+        foreach (var (kind, n) in kinds)
+        {
+            w.WriteNumber(kind, n);
+        }
+
+        w.WriteEndObject();
+    }
+
+    /// <summary>The "files" array: name, line count and SHA-256 of every file.</summary>
+    internal static void Files(Utf8JsonWriter w, IReadOnlyList<VectorFileEntry> files)
+    {
+        w.WriteStartArray("files");
+        foreach (var f in files)
+        {
+            w.WriteStartObject();
+            w.WriteString("name", f.Name);
+            w.WriteNumber("lines", f.Lines);
+            w.WriteString("sha256", f.Sha256);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
     }
 }

@@ -24,16 +24,19 @@ public static class BoxcarWeights
 
         var ones = new double[grid.Count];
         Array.Fill(ones, 1.0);
-        if (grid.IsCycle)
-        {
-            return new WeightSet(WeightScheme.Boxcar, "boxcar (window means, least squares)", CycleWindowFit.Weights(grid, ones));
-        }
-
-        return new WeightSet(WeightScheme.Boxcar, "boxcar", WindowDifference(grid, ones));
+        var label = grid.TwoWindow is null ? "boxcar (window means, least squares)" : "boxcar";
+        return new WeightSet(WeightScheme.Boxcar, label, WindowMeans(grid, ones));
     }
 
     /// <summary>
-    /// h = a (-w/sum w_R on reset, +w/sum w_S on signal) with a = 1 / (weighted mean s_S - weighted mean s_R),
+    /// The window-mean estimator with shape w: the closed-form difference for a reset/signal pair, otherwise
+    /// the least-squares fit of the window means (<see cref="CycleWindowFit"/>; the same weights up to roundoff).
+    /// </summary>
+    internal static double[] WindowMeans(SampleGrid grid, IReadOnlyList<double> w) =>
+        grid.IsResetSignalPair ? WindowDifference(grid, w) : CycleWindowFit.Weights(grid, w);
+
+    /// <summary>
+    /// h = a (-w/sum w_R on the no-charge window, +w/sum w_S on the charge window) of a reset/signal pair with a = 1 / (weighted mean s_S - weighted mean s_R),
     /// so that sum h = 0 and sum h s = 1 exactly up to roundoff.
     /// </summary>
     internal static double[] WindowDifference(SampleGrid grid, IReadOnlyList<double> w)
@@ -41,7 +44,7 @@ public static class BoxcarWeights
         double sumR = 0, sumS = 0, stepR = 0, stepS = 0;
         for (var i = 0; i < grid.Count; i++)
         {
-            if (grid.IsSignal(i))
+            if (grid.WindowOf(i) == 1)
             {
                 sumS += w[i];
                 stepS += w[i] * grid.Step[i];
@@ -68,7 +71,7 @@ public static class BoxcarWeights
         var h = new double[grid.Count];
         for (var i = 0; i < grid.Count; i++)
         {
-            h[i] = grid.IsSignal(i) ? a * w[i] / sumS : -a * w[i] / sumR;
+            h[i] = grid.WindowOf(i) == 1 ? a * w[i] / sumS : -a * w[i] / sumR;
         }
 
         return h;

@@ -2,21 +2,23 @@ using CoefGen.Core.Readout;
 
 namespace CoefGen.Core.Weights;
 
-/// <summary>The general-cycle part of the grid: reset groups, windows and the exposure of ramp samples.</summary>
+/// <summary>The cycle part of the grid: reset groups, windows and the exposure of ramp samples.</summary>
 public sealed partial class SampleGrid
 {
-    private SampleGrid(int[] sampleIndex, double[] timeS, double[] step, double rateHz, int[] group, int groupCount, GridWindow[] windows, double[] exposure)
+    private readonly int[] windowOf;
+
+    private SampleGrid(int[] sampleIndex, double[] timeS, double[] step, double rateHz, int[] group, int groupCount, GridWindow[] windows, int[] windowOf, double[] exposure, TwoWindowCycle? twoWindow)
     {
         SampleIndex = sampleIndex;
         TimeS = timeS;
         Step = step;
-        ResetCount = windows[0].Count;
         RateHz = rateHz;
         Group = group;
         GroupCount = groupCount;
         Windows = windows;
+        this.windowOf = windowOf;
         ExposureS = exposure;
-        IsCycle = true;
+        TwoWindow = twoWindow;
     }
 
     /// <summary>Reset group of each sample (0 .. <see cref="GroupCount"/>-1); all 0 for a classic grid.</summary>
@@ -29,12 +31,29 @@ public sealed partial class SampleGrid
 
     /// <summary>
     /// For ramp samples: seconds of integration since the integration start (shot noise grows with it); NaN for
-    /// samples that see no integrating charge. Null for a classic grid.
+    /// samples that see no integrating charge.
     /// </summary>
-    public IReadOnlyList<double>? ExposureS { get; }
+    public IReadOnlyList<double> ExposureS { get; }
 
-    /// <summary>True when the grid comes from a general cycle ([[timing.window]]), false for a classic two-window grid.</summary>
-    public bool IsCycle { get; }
+    /// <summary>
+    /// The reset/signal view when the grid comes from a classic-form cycle (<see cref="CycleSpec.AsTwoWindow"/>),
+    /// for output that is two-window by nature; null for a general cycle. Computation never asks it.
+    /// </summary>
+    public TwoWindowCycle? TwoWindow { get; }
+
+    /// <summary>
+    /// True when the cycle is one reset group of a window that sees no charge followed by one window after a
+    /// transfer (a classic file, or the same two windows written as [[timing.window]]): its window-mean estimator
+    /// has the closed form of a difference of the two means (<see cref="BoxcarWeights.WindowDifference"/>).
+    /// </summary>
+    public bool IsResetSignalPair =>
+        GroupCount == 1 && Windows.Count == 2 && Windows[0].Sees == ChargeSight.None && Windows[1].Sees == ChargeSight.Transfer;
+
+    /// <summary>Index into <see cref="Windows"/> of the window sample i lies in.</summary>
+    public int WindowOf(int i) => windowOf[i];
+
+    /// <summary>What sample i sees of the charge (its window's sight).</summary>
+    public ChargeSight SightOf(int i) => Windows[windowOf[i]].Sees;
 
     /// <summary>Grid indices of the samples of every reset group.</summary>
     public int[][] GroupMembers()
@@ -72,6 +91,7 @@ public sealed partial class SampleGrid
         var step = new double[n];
         var group = new int[n];
         var exposure = new double[n];
+        var windowOf = new int[n];
         var windows = new GridWindow[cycle.Windows.Count];
         var k = 0;
         var previousEnd = int.MinValue;
@@ -95,6 +115,7 @@ public sealed partial class SampleGrid
                 index[k] = w.Samples.Start + j;
                 time[k] = index[k] / rateHz;
                 group[k] = w.ResetGroup;
+                windowOf[k] = wi;
                 var dt = time[k] - w.ChargeTimeS;
                 step[k] = w.Sees switch
                 {
@@ -106,7 +127,7 @@ public sealed partial class SampleGrid
             }
         }
 
-        return new SampleGrid(index, time, step, rateHz, group, cycle.GroupCount, windows, exposure);
+        return new SampleGrid(index, time, step, rateHz, group, cycle.GroupCount, windows, windowOf, exposure, cycle.AsTwoWindow());
     }
 
     /// <summary>

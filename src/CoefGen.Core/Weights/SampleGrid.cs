@@ -9,18 +9,6 @@ namespace CoefGen.Core.Weights;
 /// </summary>
 public sealed partial class SampleGrid
 {
-    private SampleGrid(int[] sampleIndex, double[] timeS, double[] step, int resetCount, double rateHz)
-    {
-        SampleIndex = sampleIndex;
-        TimeS = timeS;
-        Step = step;
-        ResetCount = resetCount;
-        RateHz = rateHz;
-        Group = new int[sampleIndex.Length];
-        GroupCount = 1;
-        Windows = [new GridWindow(0, resetCount, ChargeSight.None, 0, 0), new GridWindow(resetCount, sampleIndex.Length - resetCount, ChargeSight.Transfer, 0, 0)];
-    }
-
     /// <summary>Index of each weighted sample within the pixel cycle (strictly increasing).</summary>
     public IReadOnlyList<int> SampleIndex { get; }
 
@@ -30,26 +18,18 @@ public sealed partial class SampleGrid
     /// <summary>Step response s_k: 0 before the transfer, 1 when settled.</summary>
     public IReadOnlyList<double> Step { get; }
 
-    /// <summary>Number of reset-window samples (they come first); for a general cycle, the samples of its first window.</summary>
-    public int ResetCount { get; }
-
-    public int SignalCount => SampleIndex.Count - ResetCount;
-
     public int Count => SampleIndex.Count;
 
     public double RateHz { get; }
 
-    /// <summary>Classic two-window grids only: sample i lies in the signal window.</summary>
-    public bool IsSignal(int i) => i >= ResetCount;
-
-    /// <summary>True when every signal sample has s = 1 exactly and every reset sample s = 0.</summary>
+    /// <summary>True when every charge-seeing sample has s = 1 exactly and every other sample s = 0.</summary>
     public bool IsSettled
     {
         get
         {
             for (var i = 0; i < Count; i++)
             {
-                if (Step[i] != (IsSignal(i) ? 1.0 : 0.0))
+                if (Step[i] != (SightOf(i) == ChargeSight.None ? 0.0 : 1.0))
                 {
                     return false;
                 }
@@ -64,16 +44,14 @@ public sealed partial class SampleGrid
     {
         ArgumentNullException.ThrowIfNull(d);
         var t = d.Timing;
-        if (t.Cycle is not null)
-        {
-            return FromCycle(d.Adc.RateHz, t.Cycle, t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null);
-        }
-
-        double? pole = t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null;
-        return Create(d.Adc.RateHz, t.Reset, t.Signal, t.TransferTimeS, pole);
+        return FromCycle(d.Adc.RateHz, t.Cycle, t.Step == StepModel.Pole ? d.Noise.FrontEndPoleHz : null);
     }
 
-    /// <summary>Builds a grid directly (tests, sweeps). <paramref name="poleHz"/> null gives the ideal step.</summary>
+    /// <summary>
+    /// Builds the two-window grid of a reset and a signal window directly (tests, sweeps) through the cycle path.
+    /// <paramref name="poleHz"/> null gives the ideal step. A transfer before the end of the reset window makes the
+    /// reset window see the step too (s follows the transfer rule in both windows).
+    /// </summary>
     public static SampleGrid Create(double rateHz, SampleWindow reset, SampleWindow signal, double transferTimeS, double? poleHz)
     {
         ArgumentNullException.ThrowIfNull(reset);
@@ -83,18 +61,7 @@ public sealed partial class SampleGrid
             throw new ArgumentException("windows must be non-empty, reset before signal, rate > 0");
         }
 
-        var n = reset.Count + signal.Count;
-        var index = new int[n];
-        var time = new double[n];
-        var step = new double[n];
-        for (var i = 0; i < n; i++)
-        {
-            index[i] = i < reset.Count ? reset.Start + i : signal.Start + (i - reset.Count);
-            time[i] = index[i] / rateHz;
-            var dt = time[i] - transferTimeS;
-            step[i] = dt <= 0 ? 0.0 : poleHz is double fp ? -double.ExpM1(-2 * Math.PI * fp * dt) : 1.0;
-        }
-
-        return new SampleGrid(index, time, step, reset.Count, rateHz);
+        var resetSees = (reset.End - 1) / rateHz - transferTimeS <= 0 ? ChargeSight.None : ChargeSight.Transfer;
+        return FromCycle(rateHz, new TwoWindowCycle(reset, signal, transferTimeS).ToCycle(resetSees), poleHz);
     }
 }

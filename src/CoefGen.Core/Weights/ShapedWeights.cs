@@ -17,11 +17,11 @@ public static class ShapedWeights
     {
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(spec);
-        var w = grid.IsCycle ? CycleShape(spec, grid) : TwoWindowShape(spec, grid);
-        var label = grid.IsCycle ? CycleLabel(spec, grid) : Label(spec, grid);
+        var w = ShapeEveryWindow(spec, grid);
+        var label = grid.TwoWindow is { } classic ? Label(spec, classic) : CycleLabel(spec, grid);
         if (!spec.RejectDrift)
         {
-            var h0 = grid.IsCycle ? CycleWindowFit.Weights(grid, w) : BoxcarWeights.WindowDifference(grid, w);
+            var h0 = BoxcarWeights.WindowMeans(grid, w);
             return new WeightSet(WeightScheme.Weighted, label, h0);
         }
 
@@ -72,23 +72,18 @@ public static class ShapedWeights
         }
     }
 
-    private static double[] TwoWindowShape(WeightsSpec spec, SampleGrid grid)
-    {
-        var reset = Shape(spec, grid.ResetCount, spec.ExplicitReset, "reset");
-        var signal = Shape(spec, grid.SignalCount, spec.ExplicitSignal, "signal");
-        var w = new double[grid.Count];
-        reset.CopyTo(w, 0);
-        signal.CopyTo(w, grid.ResetCount);
-        return w;
-    }
-
-    /// <summary>The same shape in every window of a general cycle (explicit shapes belong to two-window files).</summary>
-    private static double[] CycleShape(WeightsSpec spec, SampleGrid grid)
+    /// <summary>
+    /// The same shape in every window; explicit shapes belong to the reset and signal windows of a classic file
+    /// (<see cref="SampleGrid.TwoWindow"/>).
+    /// </summary>
+    private static double[] ShapeEveryWindow(WeightsSpec spec, SampleGrid grid)
     {
         var w = new double[grid.Count];
-        foreach (var win in grid.Windows)
+        for (var wi = 0; wi < grid.Windows.Count; wi++)
         {
-            Shape(spec, win.Count, null, "window").CopyTo(w, win.First);
+            var win = grid.Windows[wi];
+            var (given, name) = grid.TwoWindow is null ? (null, "window") : wi == 0 ? (spec.ExplicitReset, "reset") : (spec.ExplicitSignal, "signal");
+            Shape(spec, win.Count, given, name).CopyTo(w, win.First);
         }
 
         return w;
@@ -105,15 +100,15 @@ public static class ShapedWeights
         return "weighted (trapezoid, ramp " + string.Join("/", ramps.Select(r => r.ToString(CultureInfo.InvariantCulture))) + ", every window)";
     }
 
-    private static string Label(WeightsSpec spec, SampleGrid grid)
+    private static string Label(WeightsSpec spec, TwoWindowCycle classic)
     {
         if (spec.Window != WindowShape.Trapezoid)
         {
             return "weighted (" + spec.Window.ToString().ToLowerInvariant() + ")";
         }
 
-        var r = WindowShapes.EffectiveRamp(grid.ResetCount, spec.RampSamples);
-        var s = WindowShapes.EffectiveRamp(grid.SignalCount, spec.RampSamples);
+        var r = WindowShapes.EffectiveRamp(classic.Reset.Count, spec.RampSamples);
+        var s = WindowShapes.EffectiveRamp(classic.Signal.Count, spec.RampSamples);
         var ramp = r == s
             ? r.ToString(CultureInfo.InvariantCulture)
             : string.Create(CultureInfo.InvariantCulture, $"{r}/{s}");

@@ -3,7 +3,7 @@ namespace CoefGen.Core.Tests.Cycle;
 /// <summary>Readout files with a general cycle, one per kind (invented scenarios), to break in one place per test.</summary>
 internal static class CycleFiles
 {
-    private const string Head = """
+    internal const string Head = """
         name = "cyc"
 
         [adc]

@@ -30,7 +30,7 @@ public class DriftRepairTests
         var c = q.Coefficients;
         Assert.Equal(0, DriftRepair.Residual(c, grid.SampleIndex));
         Assert.Equal(0L, c.Sum());
-        Assert.Equal(1L << q.P, c.Skip(grid.ResetCount).Sum());
+        Assert.Equal(1L << q.P, c.Skip(grid.Windows[0].Count).Sum());
         var limit = (1L << (coefBits - 1)) - 1;
         Assert.All(c, v => Assert.InRange(v, -limit - 1, limit));
     }

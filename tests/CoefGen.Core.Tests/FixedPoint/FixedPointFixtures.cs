@@ -30,7 +30,7 @@ internal static class FixedPointFixtures
 
     /// <summary>Differential averager: -1/N over the reset window, +1/N over the signal window.</summary>
     public static double[] Boxcar(SampleGrid g) =>
-        [.. Enumerable.Range(0, g.Count).Select(k => g.IsSignal(k) ? 1.0 / g.SignalCount : -1.0 / g.ResetCount)];
+        [.. Enumerable.Range(0, g.Count).Select(k => (g.WindowOf(k) == 1) ? 1.0 / g.Windows[1].Count : -1.0 / g.Windows[0].Count)];
 
     public static FixedPointSettings Settings(int coefBits = 18, int accBits = 48, AccumulatorMode acc = AccumulatorMode.Wrap,
         RoundingMode rounding = RoundingMode.HalfUp, NormalizeMode normalize = NormalizeMode.Shift, int sampleBits = 16, int? frac = null, int outputBits = 32) => new()
@@ -52,9 +52,7 @@ internal static class FixedPointFixtures
     public static IntegerDesign Design(SampleGrid g, double[] h, SampledCovariance r, FixedPointSettings s, AdcSpec? adc = null)
     {
         var a = adc ?? Adc(s.SampleBits);
-        var reset = new SampleWindow(g.SampleIndex[0], g.ResetCount);
-        var signal = new SampleWindow(g.SampleIndex[g.ResetCount], g.SignalCount);
-        return FixedPointDesigner.Design("t", g, h, r, a, s, g.SampleIndex[^1] + 1, reset, signal);
+        return FixedPointDesigner.Design("t", g, h, r, a, s, g.SampleIndex[^1] + 1);
     }
 
     /// <summary>Independent reference of the datapath in BigInteger, written from the IntegerDesign doc comment.</summary>

@@ -43,7 +43,7 @@ public class NoisePenaltyTests(ITestOutputHelper output)
     private static double[] OptimalWeights(SampleGrid g, SampledCovariance r)
     {
         var m = Matrix<double>.Build.DenseOfArray(r.ToDense());
-        var a = Matrix<double>.Build.Dense(g.Count, 2, (i, j) => (j == 1) == g.IsSignal(i) ? 1.0 : 0.0);
+        var a = Matrix<double>.Build.Dense(g.Count, 2, (i, j) => (j == 1) == (g.WindowOf(i) == 1) ? 1.0 : 0.0);
         var b = Vector<double>.Build.DenseOfArray([-1.0, 1.0]);
         var ria = m.Solve(a);
         var lambda = (a.TransposeThisAndMultiply(ria)).Solve(b);

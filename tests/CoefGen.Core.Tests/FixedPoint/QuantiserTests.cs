@@ -23,8 +23,8 @@ public class QuantiserTests
         {
             var g = FixedPointFixtures.Grid(dc.ResetCount, dc.SignalCount);
             var q = Quantiser.Quantise(dc.Weights, g, dc.Covariance(g), dc.CoefBits, true);
-            var signal = q.Coefficients.Skip(g.ResetCount).Sum();
-            var reset = q.Coefficients.Take(g.ResetCount).Sum();
+            var signal = q.Coefficients.Skip(g.Windows[0].Count).Sum();
+            var reset = q.Coefficients.Take(g.Windows[0].Count).Sum();
             return signal == 1L << q.P && reset == -(1L << q.P);
         });
 

@@ -14,7 +14,7 @@ internal static class NoiseTestData
 
     /// <summary>Boxcar CDS weights: -1/N_R on the reset window, +1/N_S on the signal window (Σh = 0).</summary>
     public static double[] Boxcar(SampleGrid grid) =>
-        [.. Enumerable.Range(0, grid.Count).Select(i => grid.IsSignal(i) ? 1.0 / grid.SignalCount : -1.0 / grid.ResetCount)];
+        [.. Enumerable.Range(0, grid.Count).Select(i => (grid.WindowOf(i) == 1) ? 1.0 / grid.Windows[1].Count : -1.0 / grid.Windows[0].Count)];
 
     /// <summary>Boxcar-like weights with a smooth taper so |H| has no special zeros (Σh = 0 kept exactly).</summary>
     public static double[] Tapered(SampleGrid grid)
@@ -22,17 +22,17 @@ internal static class NoiseTestData
         var h = new double[grid.Count];
         for (var i = 0; i < grid.Count; i++)
         {
-            var local = grid.IsSignal(i) ? i - grid.ResetCount : i;
-            var n = grid.IsSignal(i) ? grid.SignalCount : grid.ResetCount;
+            var local = (grid.WindowOf(i) == 1) ? i - grid.Windows[0].Count : i;
+            var n = (grid.WindowOf(i) == 1) ? grid.Windows[1].Count : grid.Windows[0].Count;
             var taper = 1 + 0.3 * Math.Sin(Math.PI * (local + 0.5) / n);
-            h[i] = (grid.IsSignal(i) ? 1 : -1) * taper;
+            h[i] = ((grid.WindowOf(i) == 1) ? 1 : -1) * taper;
         }
 
-        var reset = h.Take(grid.ResetCount).Sum();
-        var signal = h.Skip(grid.ResetCount).Sum();
+        var reset = h.Take(grid.Windows[0].Count).Sum();
+        var signal = h.Skip(grid.Windows[0].Count).Sum();
         for (var i = 0; i < grid.Count; i++)
         {
-            h[i] /= grid.IsSignal(i) ? signal : -reset;
+            h[i] /= (grid.WindowOf(i) == 1) ? signal : -reset;
         }
 
         return h;

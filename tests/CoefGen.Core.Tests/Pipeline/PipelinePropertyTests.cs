@@ -44,7 +44,7 @@ public class PipelinePropertyTests
             Assert.Equal(0L, d.Coefficients.Sum());
             if (d.Normalize == NormalizeMode.Shift)
             {
-                Assert.Equal(1L << d.P, d.Coefficients.Skip(r.Grid.ResetCount).Sum());
+                Assert.Equal(1L << d.P, d.Coefficients.Skip(r.Grid.Windows[0].Count).Sum());
             }
 
             if (description.Weights.RejectDrift)

@@ -22,8 +22,8 @@ internal static class DescriptionAssert
     {
         Assert.Equal(e.PixelSamples, a.PixelSamples);
         Assert.Equal(e.TransferTimeS, a.TransferTimeS);
-        Assert.Equal(e.Reset, a.Reset);
-        Assert.Equal(e.Signal, a.Signal);
+        Assert.Equal(e.Cycle.AsTwoWindow()?.Reset, a.Cycle.AsTwoWindow()?.Reset);
+        Assert.Equal(e.Cycle.AsTwoWindow()?.Signal, a.Cycle.AsTwoWindow()?.Signal);
         Assert.Equal(e.Step, a.Step);
         Assert.Equal(e.Rounding, a.Rounding);
     }

@@ -26,8 +26,8 @@ public class NanosecondRoundingTests
                 "timing.signal.count_ns = 8000 ns -> 160 samples (8000 ns, +0 ns)",
             ],
             t.Rounding);
-        Assert.Equal(new Core.Readout.SampleWindow(20, 160), t.Reset);
-        Assert.Equal(new Core.Readout.SampleWindow(220, 160), t.Signal);
+        Assert.Equal(new Core.Readout.SampleWindow(20, 160), t.Cycle.AsTwoWindow()!.Reset);
+        Assert.Equal(new Core.Readout.SampleWindow(220, 160), t.Cycle.AsTwoWindow()!.Signal);
         Assert.Equal(400, t.PixelSamples);
         Assert.Equal(10010 / 1e9, t.TransferTimeS);
     }
@@ -38,7 +38,7 @@ public class NanosecondRoundingTests
         // 1025 ns at 20 MHz is sample 20.5 exactly; 8025 ns is 160.5 samples.
         var toml = NsTiming("start_ns = 1025\ncount_ns = 8025", "start = 220\ncount = 160", pixel: "pixel_samples = 400", transfer: "transfer_sample = 200");
         var t = ReadoutFixture.Load(toml).Description!.Timing;
-        Assert.Equal(new Core.Readout.SampleWindow(21, 161), t.Reset);
+        Assert.Equal(new Core.Readout.SampleWindow(21, 161), t.Cycle.AsTwoWindow()!.Reset);
         Assert.Equal(
             ["timing.reset.start_ns = 1025 ns -> sample 21 (1050 ns, +25 ns)", "timing.reset.count_ns = 8025 ns -> 161 samples (8050 ns, +25 ns)"],
             t.Rounding);
@@ -51,8 +51,8 @@ public class NanosecondRoundingTests
             .Replace("rate_hz = \"20 MHz\"", "rate_hz = \"40M\"", StringComparison.Ordinal);
         var t = ReadoutFixture.Load(toml).Description!.Timing;
         Assert.Equal(800, t.PixelSamples);
-        Assert.Equal(new Core.Readout.SampleWindow(40, 320), t.Reset);
-        Assert.Equal(new Core.Readout.SampleWindow(440, 320), t.Signal);
+        Assert.Equal(new Core.Readout.SampleWindow(40, 320), t.Cycle.AsTwoWindow()!.Reset);
+        Assert.Equal(new Core.Readout.SampleWindow(440, 320), t.Cycle.AsTwoWindow()!.Signal);
         Assert.Equal(10010 / 1e9, t.TransferTimeS);
     }
 }

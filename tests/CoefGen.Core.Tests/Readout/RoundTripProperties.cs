@@ -88,8 +88,8 @@ public class RoundTripProperties
         from scheme in Gen.Elements(WeightScheme.Boxcar, WeightScheme.Weighted, WeightScheme.Optimal)
         from window in Gen.Elements(WindowShape.Triangle, WindowShape.Hann, WindowShape.Trapezoid, WindowShape.Explicit)
         from ramp in Gen.OneOf(Gen.Constant(0), Gen.Choose(1, 10))
-        from resetShape in Shape(timing.Reset.Count)
-        from signalShape in Shape(timing.Signal.Count)
+        from resetShape in Shape(timing.Cycle.AsTwoWindow()!.Reset.Count)
+        from signalShape in Shape(timing.Cycle.AsTwoWindow()!.Signal.Count)
         from drift in Gen.Elements(true, false)
         from fixedPoint in FixedPointGen
         from emitCount in Gen.Choose(0, 2)

@@ -19,7 +19,7 @@ public class TimingValidationTests
     {
         var result = Load(With(SignalWindow, "start = 220\ncount = 180"));
         Assert.Empty(result.Diagnostics);
-        Assert.Equal(400, result.Description!.Timing.Signal.End);
+        Assert.Equal(400, result.Description!.Timing.Cycle.AsTwoWindow()!.Signal.End);
     }
 
     [Fact]

@@ -112,8 +112,8 @@ public class ValidReadoutFileTests
     {
         var t = LoadFull().Description!.Timing;
         Assert.Equal(40, t.PixelSamples);
-        Assert.Equal(new SampleWindow(5, 4), t.Reset);
-        Assert.Equal(new SampleWindow(12, 4), t.Signal);
+        Assert.Equal(new SampleWindow(5, 4), t.Cycle.AsTwoWindow()!.Reset);
+        Assert.Equal(new SampleWindow(12, 4), t.Cycle.AsTwoWindow()!.Signal);
         Assert.Equal(StepModel.Pole, t.Step);
         Assert.Equal(510 / 1e9, t.TransferTimeS);
     }

@@ -32,7 +32,7 @@ public class ReferenceDatapathLintTests
         var toml = File.ReadAllText(ExampleDesigns.ExamplePath("slowscan_spectro.toml"))
             .Replace("[timing.reset]\nstart_ns = 700", "[timing.reset]\nstart_ns = 0", StringComparison.Ordinal);
         var r = ExampleDesigns.FromText(toml, "slow_reset0.toml");
-        Assert.Equal(0, r.Datapath.Reset.Start);
+        Assert.Equal(0, r.Datapath.Reset!.Start);
         AssertLintClean(r);
         using var dir = new TempDir();
         var prefix = ReferenceBench.Write(dir, r, 40);

@@ -19,7 +19,7 @@ public static class Vectors
         var list = new List<long[]>
         {
             Fill(_ => lo), Fill(_ => hi), Fill(_ => mid),
-            Fill(i => d.Reset.Contains(i) ? lo : hi), Fill(i => d.Reset.Contains(i) ? hi : lo),
+            Fill(i => d.Reset!.Contains(i) ? lo : hi), Fill(i => d.Reset!.Contains(i) ? hi : lo),
             Fill(i => i % 2 == 0 ? lo : hi), Fill(i => i % 2 == 0 ? hi : lo),
         };
         var rng = new Random(seed);

@@ -35,6 +35,6 @@ public static class ExampleDesigns
     {
         var w = r.Weights.Single(x => x.Scheme == scheme);
         var d = r.Description;
-        return FixedPointDesigner.Design(d.Name, r.Grid, w.H, r.Covariance, d.Adc, r.FixedPointSettings, d.Timing.PixelSamples, d.Timing.Reset, d.Timing.Signal);
+        return FixedPointDesigner.Design(d.Name, r.Grid, w.H, r.Covariance, d.Adc, r.FixedPointSettings, d.Timing.PixelSamples);
     }
 }

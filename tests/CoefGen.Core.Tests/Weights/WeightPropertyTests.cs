@@ -37,7 +37,7 @@ public class WeightPropertyTests
         Prop.ForAll(RandomCase.Arbitrary(), c =>
         {
             // An extra constraint can only raise the minimum (common practice, no source). Tolerance 1e-12 relative.
-            if (c.Grid.ResetCount < 2 || c.Grid.SignalCount < 2)
+            if (c.Grid.Windows[0].Count < 2 || c.Grid.Windows[1].Count < 2)
             {
                 return true;
             }

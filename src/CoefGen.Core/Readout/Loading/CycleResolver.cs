@@ -113,11 +113,9 @@ internal static class CycleResolver
 
         var windows = Renumber(placed);
         var groups = windows.Max(w => w.ResetGroup) + 1;
-        var first = windows[0];
-        var last = windows[^1];
         var transfer = windows.FirstOrDefault(w => w.Sees == ChargeSight.Transfer)?.ChargeTimeS ?? 0.0;
         var cycle = new CycleSpec(windows, groups, integration?.ReferenceS, integration?.Shot, input.Repeat?.Times ?? 1);
-        return new TimingSpec(pixel.Value, transfer, first.Samples, last.Samples, step, rounding) { Cycle = cycle };
+        return new TimingSpec(pixel.Value, transfer, cycle, step, rounding);
     }
 
     private sealed record Integration(double StartS, double ReferenceS, ShotNoiseSpec Shot);

@@ -14,9 +14,9 @@ internal static class TwoStageRules
         var context = weights.Context;
         var at = weights.Entry("form")!.ValueLocation;
         var path = weights.KeyPath("form");
-        if (timing is not null && (timing.Cycle is null || timing.Cycle.RepeatCount < 2))
+        if (timing is not null && (timing.Cycle.IsClassic || timing.Cycle.RepeatCount < 2))
         {
-            var has = timing.Cycle is null
+            var has = timing.Cycle.IsClassic
                 ? "this file has the classic two-window timing"
                 : "this cycle has no [timing.repeat] with times >= 2";
             context.Error(TwoStageCodes.NotIdenticalReads, at, path,

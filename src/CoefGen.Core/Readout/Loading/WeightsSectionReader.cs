@@ -41,15 +41,16 @@ internal static class WeightsSectionReader
             TwoStageRules.Check(weights, timing, scheme ?? WeightScheme.Optimal, rejectDrift ?? false);
         }
 
-        if (window == WindowShape.Explicit && timing?.Cycle is not null)
+        var twoWindow = timing?.Cycle.AsTwoWindow();
+        if (window == WindowShape.Explicit && timing is not null && twoWindow is null)
         {
             context.Error(CycleCodes.TwoWindowOnly, weights.Entry("window")!.ValueLocation, weights.KeyPath("window"),
                 "window = \"explicit\" gives one reset and one signal shape, which applies to a classic two-window timing; with [[timing.window]] use \"triangle\", \"hann\" or \"trapezoid\" (applied to every window)");
         }
         else if (window == WindowShape.Explicit)
         {
-            CheckShape(weights, "reset", reset, timing?.Reset.Count);
-            CheckShape(weights, "signal", signal, timing?.Signal.Count);
+            CheckShape(weights, "reset", reset, twoWindow?.Reset.Count);
+            CheckShape(weights, "signal", signal, twoWindow?.Signal.Count);
         }
         else if (!weights.Has("window") || window is not null)
         {

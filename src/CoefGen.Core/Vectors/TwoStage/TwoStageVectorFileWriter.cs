@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
 using CoefGen.Core.Emit;
@@ -28,25 +27,12 @@ public static class TwoStageVectorFileWriter
         var kinds = new List<(string Kind, int Count)>();
         try
         {
-            var (stimHex, stimDec, outHex, accHex, expDec, table, sums) = (outs[0], outs[1], outs[2], outs[3], outs[4], outs[5], outs[6]);
-            table.Line("pixel,kind,charge_adu,charge_e,expected_output,expected_output_adu,expected_accumulator,accumulator_clipped,output_saturated");
-            var scale = Math.ScaleB(1.0, -d.OutputFracBits);
+            outs[5].Line(VectorFileWriter.TableHeader);
             var i = 0;
             foreach (var p in vectors.Pixels)
             {
-                var e = p.Expected;
-                foreach (var c in p.Codes)
-                {
-                    stimHex.Line(VectorFiles.UnsignedHex(c, d.AdcBits));
-                }
-
-                stimDec.Line(string.Join(' ', p.Codes.Select(Dec)));
-                outHex.Line(LiteralFormat.MaskedHex(e.Output, d.OutputBits));
-                accHex.Line(LiteralFormat.MaskedHex(e.Accumulator, d.AccBits));
-                expDec.Line(Dec(e.Output) + " " + Dec(e.Accumulator));
-                sums.Line(string.Join(' ', p.ReadSums!.Select(Dec)));
-                table.Line(string.Create(CultureInfo.InvariantCulture,
-                    $"{i},{p.Kind},{R(p.ChargeAdu)},{R(p.ChargeAdu / vectors.AduPerElectron)},{Dec(e.Output)},{R(e.Output * scale)},{Dec(e.Accumulator)},{(e.AccumulatorClipped ? 1 : 0)},{(e.OutputSaturated ? 1 : 0)}"));
+                VectorFileWriter.WritePixel(outs, i, p, d.AdcBits, d.OutputBits, d.AccBits, d.OutputFracBits, vectors.AduPerElectron);
+                outs[6].Line(string.Join(' ', p.ReadSums!.Select(v => v.ToString(CultureInfo.InvariantCulture))));
                 var k = kinds.FindIndex(x => x.Kind == p.Kind);
                 if (k < 0)
                 {
@@ -65,7 +51,7 @@ public static class TwoStageVectorFileWriter
                 w.Finish();
             }
 
-            var files = (alongside ?? []).Select(a => new VectorFileEntry(a.Name, a.Bytes.Count(b => b == (byte)'\n'), Convert.ToHexStringLower(SHA256.HashData(a.Bytes))))
+            var files = (alongside ?? []).Select(a => VectorFileWriter.Entry(a.Name, a.Bytes))
                 .Concat(outs.Select(w => new VectorFileEntry(w.Name, w.Lines, w.Sha256))).ToList();
             using var manifest = new HashingWriter(VectorFileNames.Manifest, open(VectorFileNames.Manifest));
             manifest.Raw(Manifest(vectors, i, kinds, files, toolName, toolVersion));
@@ -127,31 +113,12 @@ public static class TwoStageVectorFileWriter
             w.WriteNumber("baseline_adu", v.BaselineAdu);
             w.WriteNumber("full_scale_charge_adu", v.FullScaleChargeAdu);
             w.WriteNumber("adu_per_electron", v.AduPerElectron);
-            w.WriteStartObject("kinds");
-            foreach (var (kind, n) in kinds)
-            {
-                w.WriteNumber(kind, n);
-            }
-
-            w.WriteEndObject();
-            w.WriteStartArray("files");
-            foreach (var f in files)
-            {
-                w.WriteStartObject();
-                w.WriteString("name", f.Name);
-                w.WriteNumber("lines", f.Lines);
-                w.WriteString("sha256", f.Sha256);
-                w.WriteEndObject();
-            }
-
-            w.WriteEndArray();
+            VectorManifestWriter.Kinds(w, kinds);
+            VectorManifestWriter.Files(w, files);
             w.WriteEndObject();
         }
 
         return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
     }
 
-    private static string Dec(long v) => v.ToString(CultureInfo.InvariantCulture);
-
-    private static string R(double v) => v.ToString("R", CultureInfo.InvariantCulture);
 }

@@ -20,11 +20,6 @@ public sealed record ReadLayout(int Reads, int PerRead, int Period, IReadOnlyLis
     public static ReadLayout? Of(SampleGrid grid)
     {
         ArgumentNullException.ThrowIfNull(grid);
-        if (!grid.IsCycle)
-        {
-            return null;
-        }
-
         var reads = grid.Windows.Max(w => w.Read) + 1;
         if (reads < 2 || grid.Count % reads != 0)
         {

@@ -58,7 +58,7 @@ public sealed class StructuredOptimalSolverTests
         Assert.True(s.Converged, s.Failure);
         for (var i = 0; i < grid.Count; i++)
         {
-            var boxcar = grid.IsSignal(i) ? 1.0 / grid.SignalCount : -1.0 / grid.ResetCount;
+            var boxcar = (grid.WindowOf(i) == 1) ? 1.0 / grid.Windows[1].Count : -1.0 / grid.Windows[0].Count;
             Assert.Equal(boxcar, s.Weights[i], 1e-14);
         }
 
