@@ -109,4 +109,18 @@ public class TwoStageCommandTests
         File.WriteAllLines(dump, lines);
         Assert.Equal(1, CliRunner.Run("verify", path, "--vectors", dir, "--dut", dump).ExitCode);
     }
+
+    [Fact]
+    public void Two_stage_with_noise_capture_is_a_located_error()
+    {
+        var dir = RepoPaths.TempDir();
+        var cycles = Path.GetDirectoryName(RepoPaths.Example(Path.Combine("cycles", "skipper_capture.toml")))!;
+        File.Copy(Path.Combine(cycles, "skipper_capture_idle.i16"), Path.Combine(dir, "skipper_capture_idle.i16"));
+        var text = File.ReadAllText(Path.Combine(cycles, "skipper_capture.toml")).Replace("[weights]\n", "[weights]\nform = \"two-stage\"\n", StringComparison.Ordinal);
+        var path = Path.Combine(dir, "skipper_capture.toml");
+        File.WriteAllText(path, text);
+        var r = CliRunner.Run("design", path);
+        Assert.Equal(2, r.ExitCode);
+        Assert.Contains("error CG1275: weights.form", r.Error, StringComparison.Ordinal);
+    }
 }

@@ -5,9 +5,8 @@ using CoefGen.Core.Readout;
 namespace CoefGen.Cli.Commands;
 
 /// <summary>
-/// The stages that still take only the classic two-window cycle (emission, vectors and the reference datapath,
-/// verification, reports, sweeps, captures) refuse a general cycle with a located error instead of writing
-/// something wrong.
+/// The stages that still take only the classic two-window cycle (the sweep's window searches; `fit` and noise.capture
+/// take a cycle since issue 11) refuse a general cycle with a located error instead of writing something wrong.
 /// </summary>
 internal static class CycleRefusal
 {

@@ -26,11 +26,6 @@ internal static class DesignRunner
             var result = DesignPipeline.Run(load.Description, catalog);
             if (load.Description.Noise.CapturePath is string capturePath)
             {
-                if (CycleRefusal.Refuse(load.Description, "noise.capture", error))
-                {
-                    return null;
-                }
-
                 var capture = LoadCapture(load.Description, readoutPath, capturePath, error);
                 if (capture is null)
                 {

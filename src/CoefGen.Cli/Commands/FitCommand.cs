@@ -42,11 +42,6 @@ internal static class FitCommand
         }
 
         var d = load.Description;
-        if (CycleRefusal.Refuse(d, "fit", error))
-        {
-            return ExitCodes.BadInput;
-        }
-
         var file = SourceLocation.FileOnly(capturePath);
         CaptureEncoding encoding;
         switch (format)

@@ -115,7 +115,7 @@ internal static class VectorsCommand
                 return ExitCodes.BadInput;
             }
 
-            if ((source?.SamplerNote ?? twoStage!.SamplerNote) is string note)
+            if ((twoStage is null ? source!.SamplerNote : twoStage.SamplerNote) is string note)
             {
                 DiagnosticPrinter.Print(error, [Diagnostic.Warning(VectorCodes.EmbeddingClipped, SourceLocation.FileOnly(path), note)]);
             }

@@ -52,7 +52,9 @@ internal static class CycleText
 
     public static void AppendSignalLevels(StringBuilder sb, DesignResult r)
     {
-        var rows = SignalLevelTable.Compute(r.Grid, r.Covariance, r.Description, r.Chosen.H, r.Description.Weights.RejectDrift);
+        var rows = r.CaptureCovariance is { } measured
+            ? CoefGen.Core.Capture.CaptureSignalLevels.Compute(r.Grid, measured, r.Description, r.Chosen.H, r.Description.Weights.RejectDrift)
+            : SignalLevelTable.Compute(r.Grid, r.Covariance, r.Description, r.Chosen.H, r.Description.Weights.RejectDrift);
         if (rows.Count < 2)
         {
             return;
@@ -74,6 +76,11 @@ internal static class CycleText
     {
         if (r.TwoStage is not { Real: var two, Quantised: var integer })
         {
+            if (r.CaptureCovariance is not null && CoefGen.Core.Weights.TwoStage.ReadLayout.Of(r.Grid) is not null)
+            {
+                sb.Append("Two-stage form: not designed on a capture (its solver takes the model's per-read blocks); drop noise.capture to see it\n\n");
+            }
+
             return;
         }
 

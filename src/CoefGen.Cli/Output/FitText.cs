@@ -49,9 +49,12 @@ internal static class FitText
                 table.Add([v.Label, Eng.Num(v.MeasuredSigmaV / perE), $"{Eng.Num(v.LowerSigmaV / perE)}..{Eng.Num(v.UpperSigmaV / perE)}", Eng.Num(v.PredictedModelSigmaV / perE), Eng.Num(v.PredictedCaptureSigmaV / perE)]);
             }
 
+            // 28 columns hold the classic labels (kept as they were, byte for byte); a cycle's longer labels widen the column.
+            var longest = table.Max(r => r[0].Length);
+            var labelWidth = !d.Timing.Cycle.IsClassic && longest > 28 ? longest + 1 : 28;
             foreach (var row in table)
             {
-                w.Append("  ").Append(row[0].PadRight(28));
+                w.Append("  ").Append(row[0].PadRight(labelWidth));
                 for (var c = 1; c < row.Length; c++)
                 {
                     w.Append(row[c].PadLeft(17));

@@ -30,6 +30,13 @@ public static class CaptureAnalysis
                 $"the capture has {Int(capture.CycleLength)} samples per cycle but timing.pixel_samples is {Int(description.Timing.PixelSamples)}");
         }
 
+        var grid = SampleGrid.FromDescription(description);
+        if (capture.Layout == CaptureLayout.PixelSynchronous)
+        {
+            // A stream has no covariance of the weighted samples: only the spectrum and the fit.
+            CheckCycleSize(description, grid, "timing.window");
+        }
+
         var record = CaptureSamples.ResidualStream(capture, adc.LsbV);
         var segment = options.SegmentLength ?? WelchEstimator.DefaultSegmentLength(record.Length);
         if (segment > record.Length / 2)
@@ -64,7 +71,6 @@ public static class CaptureAnalysis
         var unresolved = fit.Unresolved.Select(term => Diagnostic.Warning(CaptureCodes.TermNotResolved, file, term == FitTerms.PoleTerm
             ? "the spectrum does not resolve a front-end pole (flat up to Nyquist or not determined): the fit leaves it out and its white part ends at Nyquist (bandwidth_hz = rate / 2)"
             : "the spectrum does not resolve a 1/f term (no rise at low frequencies above the uncertainty): the fit leaves it out (flicker corner 0)"));
-        var grid = SampleGrid.FromDescription(description);
         var result = new CaptureAnalysisResult
         {
             Capture = capture,
@@ -80,16 +86,32 @@ public static class CaptureAnalysis
         return capture.Layout == CaptureLayout.Stream ? result : WithValidation(result, description, options);
     }
 
+    /// <summary>
+    /// Most weighted samples of a general cycle the dense capture covariance takes: it keeps about six N x N
+    /// matrices (200 MB at 2048) and accumulates P N² products over the P cycles. Classic files have no limit
+    /// (their windows are short and their results stay as they were).
+    /// </summary>
+    public const int MaxCycleSamples = 2048;
+
     /// <summary>The capture covariance of a pixel-synchronous capture and optimal weights designed on it (no validation split: all cycles).</summary>
+    /// <param name="description">The readout file.</param>
+    /// <param name="capture">A pixel-synchronous capture of idle cycles.</param>
+    /// <param name="target">The parametric model the estimate is shrunk towards.</param>
+    /// <param name="shot">
+    /// Shot noise of an integrating charge at the readout's signal level, or null. An idle capture holds the read noise
+    /// only, so this term (from the readout file) is added to the capture covariance for the solve; it is not part of
+    /// the returned <see cref="CaptureCovariance"/>.
+    /// </param>
     public static (CaptureCovariance Covariance, OptimalSolution Solution) DesignOnCapture(
-        ReadoutDescription description, SampleCapture capture, NoiseModel target)
+        ReadoutDescription description, SampleCapture capture, NoiseModel target, ShotNoiseCovariance? shot = null)
     {
         ArgumentNullException.ThrowIfNull(description);
         ArgumentNullException.ThrowIfNull(capture);
         ArgumentNullException.ThrowIfNull(target);
         var grid = SampleGrid.FromDescription(description);
+        CheckCycleSize(description, grid, "noise.capture");
         var covariance = CaptureCovariance.Estimate(capture, Enumerable.Range(0, capture.Rows).ToArray(), grid, description.Adc.LsbV, Dense(target.Sample(grid)));
-        return (covariance, SolveOnCapture(description, grid, covariance, capture));
+        return (covariance, SolveOnCapture(description, grid, covariance, capture, shot));
     }
 
     private static CaptureAnalysisResult WithValidation(CaptureAnalysisResult result, ReadoutDescription d, CaptureAnalysisOptions options)
@@ -131,16 +153,40 @@ public static class CaptureAnalysis
         return result with { DesignRows = designRows, HeldOutRows = heldOut, Covariance = covariance, Validation = validation };
     }
 
-    private static OptimalSolution SolveOnCapture(ReadoutDescription d, SampleGrid grid, CaptureCovariance covariance, SampleCapture capture)
+    private static OptimalSolution SolveOnCapture(ReadoutDescription d, SampleGrid grid, CaptureCovariance covariance, SampleCapture capture, ShotNoiseCovariance? shot = null)
     {
         try
         {
-            return DenseMatrixOptimalSolver.Solve(grid, covariance.Matrix, d.Weights.RejectDrift);
+            return DenseMatrixOptimalSolver.Solve(grid, shot is null ? covariance.Matrix : WithShot(covariance.Matrix, grid.Count, shot), d.Weights.RejectDrift);
         }
         catch (CovarianceNotPositiveDefiniteException ex)
         {
             throw Fail(CaptureCodes.FitFailed, SourceLocation.FileOnly(capture.SourcePath), $"the capture covariance is not positive definite on the constraint null space ({ex.Message})");
         }
+    }
+
+    private static void CheckCycleSize(ReadoutDescription d, SampleGrid grid, string key)
+    {
+        if (!d.Timing.Cycle.IsClassic && grid.Count > MaxCycleSamples)
+        {
+            throw new InputException(Diagnostic.Error(CaptureCodes.CycleTooLarge, d.LocationOf(key),
+                $"the cycle has {Int(grid.Count)} weighted samples; a capture covariance is dense and takes at most {Int(MaxCycleSamples)} (fewer reads or shorter windows; `coefgen design` without noise.capture takes the full cycle)", key));
+        }
+    }
+
+    /// <summary>C + K: the capture matrix with a shot term added (a new array).</summary>
+    internal static double[] WithShot(double[] matrix, int n, ShotNoiseCovariance shot)
+    {
+        var m = (double[])matrix.Clone();
+        for (var i = 0; i < n; i++)
+        {
+            for (var j = 0; j < n; j++)
+            {
+                m[(i * n) + j] += shot.At(i, j);
+            }
+        }
+
+        return m;
     }
 
     private static double[] Dense(SampledCovariance r)

@@ -27,6 +27,9 @@ public static class CaptureCodes
     /// <summary>The noise model could not be fitted to the spectrum.</summary>
     public const string FitFailed = "CG5008";
 
+    /// <summary>A general cycle with more weighted samples than the dense capture covariance takes.</summary>
+    public const string CycleTooLarge = "CG5009";
+
     /// <summary>Warning: the capture is quieter than quantisation of a live input allows (a stuck ADC).</summary>
     public const string StuckAdc = "CG5010";
 

@@ -5,9 +5,9 @@ namespace CoefGen.Core.Capture;
 /// <summary>
 /// The covariance of the grid samples estimated from pixel cycles, shrunk towards a stationary model:
 /// C = (1 - lambda) S + lambda T. S is the sample covariance (mean waveform removed per position), T the
-/// model at the same instants. Both are first projected onto sum h = 0 (every weight set has sum h = 0,
-/// so nothing is lost, and the arbitrary constant the 1/f model leaves in T cannot inflate the distance
-/// S - T). lambda is the Ledoit-Wolf-type intensity for a fixed target (Schafer and Strimmer 2005, eq. for
+/// model at the same instants. Both are first projected onto sum h = 0 over each reset group (every weight set
+/// has that, so nothing is lost; a classic grid is one group): each cycle's own reset levels (kTC) and the
+/// arbitrary constant the 1/f model leaves in T then cannot inflate S or the distance S - T. lambda is the Ledoit-Wolf-type intensity for a fixed target (Schafer and Strimmer 2005, eq. for
 /// target F): sum Var(s_ij) / sum (s_ij - t_ij)², clipped to [<see cref="MinimumShrinkage"/>, 1].
 /// </summary>
 /// <param name="Count">Grid samples N.</param>
@@ -55,25 +55,33 @@ public sealed record CaptureCovariance(int Count, double[] Matrix, double[] Samp
         }
 
         var mean = CaptureSamples.MeanWaveform(capture, rowsUsed);
+        var groups = grid.GroupMembers();
         var x = new double[p * n];
         for (var k = 0; k < p; k++)
         {
-            var rowMean = 0.0;
             for (var i = 0; i < n; i++)
             {
                 var c = grid.SampleIndex[i];
                 x[(k * n) + i] = (capture.At(rowsUsed[k], c) - mean[c]) * lsbV;
-                rowMean += x[(k * n) + i];
             }
 
-            rowMean /= n;
-            for (var i = 0; i < n; i++)
+            foreach (var members in groups)
             {
-                x[(k * n) + i] -= rowMean;
+                var groupMean = 0.0;
+                foreach (var i in members)
+                {
+                    groupMean += x[(k * n) + i];
+                }
+
+                groupMean /= members.Length;
+                foreach (var i in members)
+                {
+                    x[(k * n) + i] -= groupMean;
+                }
             }
         }
 
-        var t = Project(target, n);
+        var t = Project(target, n, grid.Group, groups);
         var sum = new double[n * n];
         var sumSq = new double[n * n];
         for (var k = 0; k < p; k++)
@@ -82,12 +90,22 @@ public sealed record CaptureCovariance(int Count, double[] Matrix, double[] Samp
             for (var i = 0; i < n; i++)
             {
                 var xi = x[row + i];
-                for (var j = 0; j < n; j++)
+                for (var j = i; j < n; j++)
                 {
                     var w = xi * x[row + j];
                     sum[(i * n) + j] += w;
                     sumSq[(i * n) + j] += w * w;
                 }
+            }
+        }
+
+        // The upper triangle mirrored: x_i x_j = x_j x_i exactly, summed in the same order of cycles.
+        for (var i = 0; i < n; i++)
+        {
+            for (var j = 0; j < i; j++)
+            {
+                sum[(i * n) + j] = sum[(j * n) + i];
+                sumSq[(i * n) + j] = sumSq[(j * n) + i];
             }
         }
 
@@ -113,28 +131,37 @@ public sealed record CaptureCovariance(int Count, double[] Matrix, double[] Samp
         return new CaptureCovariance(n, c2, s, lambda, p);
     }
 
-    /// <summary>P T P with P = I - 1 1^T / N.</summary>
-    private static double[] Project(double[] m, int n)
+    /// <summary>
+    /// P T P with P = I - sum over groups g of 1_g 1_g^T / N_g: each entry less the mean of its row over the column's
+    /// group and of its column over the row's group, plus the mean of the block (one group: I - 1 1^T / N).
+    /// </summary>
+    private static double[] Project(double[] m, int n, IReadOnlyList<int> group, int[][] groups)
     {
-        var rowMean = new double[n];
-        var colMean = new double[n];
-        var all = 0.0;
+        // rowMean[i, g]: mean of row i over the columns of group g; colMean[g, j] likewise; block[g, h] the block's mean.
+        var g = groups.Length;
+        var rowMean = new double[n * g];
+        var colMean = new double[g * n];
+        var block = new double[g * g];
         for (var i = 0; i < n; i++)
         {
+            var gi = group[i];
             for (var j = 0; j < n; j++)
             {
-                rowMean[i] += m[(i * n) + j] / n;
-                colMean[j] += m[(i * n) + j] / n;
-                all += m[(i * n) + j] / ((double)n * n);
+                var gj = group[j];
+                rowMean[(i * g) + gj] += m[(i * n) + j] / groups[gj].Length;
+                colMean[(gi * n) + j] += m[(i * n) + j] / groups[gi].Length;
+                block[(gi * g) + gj] += m[(i * n) + j] / ((double)groups[gi].Length * groups[gj].Length);
             }
         }
 
         var r = new double[n * n];
         for (var i = 0; i < n; i++)
         {
+            var gi = group[i];
             for (var j = 0; j < n; j++)
             {
-                r[(i * n) + j] = m[(i * n) + j] - rowMean[i] - colMean[j] + all;
+                var gj = group[j];
+                r[(i * n) + j] = m[(i * n) + j] - rowMean[(i * g) + gj] - colMean[(gi * n) + j] + block[(gi * g) + gj];
             }
         }
 

@@ -43,6 +43,7 @@ public sealed class TemplateModel
         var g = new ScriptObject();
         var prefix = IdentifierPrefix.FromName(d.Name);
         Names(g, d.Name, prefix, provenance);
+        Set(g, "vhdl_package", prefix + "_coefs_pkg");
 
         Set(g, "pixel_samples", d.PixelSamples);
         if (d.Reset is { } reset && d.Signal is { } signal)

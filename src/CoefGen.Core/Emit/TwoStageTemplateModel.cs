@@ -32,6 +32,7 @@ public static class TwoStageTemplateModel
         var g = new ScriptObject();
         var prefix = IdentifierPrefix.FromName(name);
         Names(g, name, prefix, provenance);
+        Set(g, "vhdl_package", prefix + "_two_stage_pkg");
 
         Set(g, "pixel_samples", pixelSamples);
         Set(g, "read_count", layout.Reads);

@@ -13,10 +13,24 @@ public static class SignalLevelTable
 {
     public static IReadOnlyList<SignalLevelRow> Compute(SampleGrid grid, SampledCovariance covariance, ReadoutDescription d, IReadOnlyList<double> designed, bool rejectDrift)
     {
-        ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(covariance);
-        ArgumentNullException.ThrowIfNull(d);
         ArgumentNullException.ThrowIfNull(designed);
+        return AtEveryLevel(grid, d, shot =>
+        {
+            var r = covariance.WithShot(shot);
+            return (r.QuadraticForm(designed), new DenseNullSpaceSolver().Solve(grid, r, rejectDrift).VarianceV2);
+        });
+    }
+
+    /// <summary>
+    /// The rows for any read-noise covariance: <paramref name="variances"/> gives, for the shot term of one level, the
+    /// designed weights' variance and the optimum's there (V²).
+    /// </summary>
+    public static IReadOnlyList<SignalLevelRow> AtEveryLevel(SampleGrid grid, ReadoutDescription d, Func<ShotNoiseCovariance?, (double Designed, double Optimal)> variances)
+    {
+        ArgumentNullException.ThrowIfNull(grid);
+        ArgumentNullException.ThrowIfNull(d);
+        ArgumentNullException.ThrowIfNull(variances);
         var shot = d.Timing.Cycle.ShotNoise;
         if (shot is null)
         {
@@ -28,11 +42,10 @@ public static class SignalLevelTable
         var rows = new List<SignalLevelRow>(levels.Count);
         foreach (var level in levels)
         {
-            var r = covariance.WithShot(ShotNoiseCovariance.For(grid, d.Sensor, level + shot.DarkCurrentEPerS));
-            var optimal = new DenseNullSpaceSolver().Solve(grid, r, rejectDrift).VarianceV2;
+            var (designedV2, optimal) = variances(ShotNoiseCovariance.For(grid, d.Sensor, level + shot.DarkCurrentEPerS));
             rows.Add(new SignalLevelRow(
                 level,
-                Math.Sqrt(r.QuadraticForm(designed)) / perElectron,
+                Math.Sqrt(designedV2) / perElectron,
                 Math.Sqrt(optimal) / perElectron,
                 level == shot.PhotonFluxEPerS));
         }

@@ -15,6 +15,9 @@ public static class TwoStageCodes
     /// <summary>Two-stage weights for a scheme other than optimal (the two-stage design is the joint optimum).</summary>
     public const string SchemeNotOptimal = "CG1273";
 
+    /// <summary>Two-stage weights with noise.capture (the two-stage design works on the model's per-read blocks, not on a measured matrix).</summary>
+    public const string WithCapture = "CG1275";
+
     /// <summary>A stage that takes the full table only (instrument files, diff) was given a two-stage design.</summary>
     public const string FullTableOnly = "CG1274";
 }

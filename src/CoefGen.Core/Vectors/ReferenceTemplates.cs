@@ -28,10 +28,12 @@ public static class ReferenceTemplates
     /// <summary>With form = "two-stage": the two-stage packages (the Verilog datapath includes the Verilog one).</summary>
     public static IReadOnlyList<string> TwoStagePackages { get; } = ["two-stage-verilog-include", "two-stage-c-header", "two-stage-vhdl-package", "two-stage-sv-package"];
 
-    /// <summary>With form = "two-stage": the two-stage Verilog datapath and the (shared) self-checking Verilog testbench.</summary>
+    /// <summary>With form = "two-stage": the two-stage Verilog and VHDL datapaths and the (shared) self-checking testbenches.</summary>
     public static IReadOnlyList<(string FileName, string OutputSuffix)> TwoStageFiles { get; } =
     [
         ("ref-two-stage-datapath.v.scriban", "_datapath.v"),
         ("ref-tb.v.scriban", "_tb.v"),
+        ("ref-two-stage-datapath.vhd.scriban", "_datapath.vhd"),
+        ("ref-tb.vhd.scriban", "_tb.vhd"),
     ];
 }

@@ -76,6 +76,13 @@ internal static class BadInputCorpus
         new("capture-is-a-folder", s => { s.Dir("cap.i16"); return ["design", s.Edit(Cap, CaptureLine, "capture = \"cap.i16\"")]; }, CliCodes.InputNotRegular, s => At(s, "edited_" + Cap, "capture =")),
         new("capture-is-a-fifo", s => { s.Fifo("cap.i16"); return ["emit", s.Edit(Cap, CaptureLine, "capture = \"cap.i16\""), "-f", "c-header"]; }, CliCodes.InputNotRegular, s => At(s, "edited_" + Cap, "capture =")),
         new("capture-too-large", s => { s.Sparse("cap.i16", 300L << 20); return ["design", s.Edit(Cap, CaptureLine, "capture = \"cap.i16\"")]; }, CliCodes.InputTooLarge, s => At(s, "edited_" + Cap, "capture =")),
+        // Captures of a general cycle (examples/cycles/skipper_capture.toml: 200 samples per cycle, 128 weighted).
+        new("fit-cycle-capture-not-whole-cycles", s => ["fit", SkipperCapture(s, (50 * 200) + 37), "--readout", Skipper(s)], CaptureCodes.Truncated, s => s.Path("cycles/skipper_capture_idle.i16")),
+        new("fit-cycle-capture-too-short", s => ["fit", SkipperCapture(s, 5 * 200), "--readout", Skipper(s)], CaptureCodes.TooFewSamples, s => s.Path("cycles/skipper_capture_idle.i16")),
+        new("design-cycle-capture-too-short", s => { SkipperCapture(s, 5 * 200); return ["design", Skipper(s)]; }, CaptureCodes.TooFewSamples, s => s.Path("cycles/skipper_capture_idle.i16")),
+        new("design-cycle-capture-not-whole-cycles", s => { SkipperCapture(s, (64 * 200) + 1); return ["design", Skipper(s), "--json"]; }, CaptureCodes.Truncated, s => s.Path("cycles/skipper_capture_idle.i16")),
+        new("fit-cycle-too-large-for-a-capture", s => ["fit", SkipperCapture(s, 20 * 3200), "--readout", Skipper(s, ("times = 8", "times = 129"), ("pixel_samples = 200", "pixel_samples = 3200"))], CaptureCodes.CycleTooLarge, s => At(s, "cycles/skipper_capture.toml", "[[timing.window]]")),
+        new("design-cycle-too-large-for-a-capture", s => { SkipperCapture(s, 20 * 3200); return ["design", Skipper(s, ("times = 8", "times = 129"), ("pixel_samples = 200", "pixel_samples = 3200"))]; }, CaptureCodes.CycleTooLarge, s => At(s, "cycles/skipper_capture.toml", "capture =")),
         new("fit-capture-is-a-folder", s => ["fit", s.Dir("c.i16"), "--readout", s.Path(Cap)], CliCodes.InputNotRegular, s => s.Path("c.i16")),
         new("fit-capture-is-dev-zero", s => ["fit", "/dev/zero", "--readout", s.Path(Cap), "--format", "raw16"], CliCodes.InputNotRegular, _ => "/dev/zero"),
         new("fit-readout-missing", s => ["fit", s.Path("capture_bench_idle.i16"), "--readout", s.Path("nope.toml")], "CG0002", s => s.Path("nope.toml")),
@@ -124,6 +131,28 @@ internal static class BadInputCorpus
         new("sweep-target-zero", s => ["sweep", s.Fast, "--target-noise-e", "0"], CliCodes.BadOption, _ => "--target-noise-e"),
         new("sweep-readout-is-a-folder", s => ["sweep", s.Dir("d.toml"), "--vary", "adc.rate_hz=40M"], CliCodes.InputNotRegular, s => s.Path("d.toml")),
     ];
+
+    /// <summary>The repeated-reads example written into the sandbox's cycles/ folder, with textual edits.</summary>
+    private static string Skipper(Sandbox s, params (string From, string To)[] edits)
+    {
+        var text = File.ReadAllText(Path.Combine(RepoPaths.Root, "examples", "cycles", "skipper_capture.toml"));
+        foreach (var (from, to) in edits)
+        {
+            Assert.Contains(from, text, StringComparison.Ordinal);
+            text = text.Replace(from, to, StringComparison.Ordinal);
+        }
+
+        return s.Write("cycles/skipper_capture.toml", text);
+    }
+
+    /// <summary>An idle capture of <paramref name="samples"/> int16 codes (all 0) where the example's readout looks for it.</summary>
+    private static string SkipperCapture(Sandbox s, int samples)
+    {
+        var path = s.Path("cycles/skipper_capture_idle.i16");
+        Directory.CreateDirectory(Path.GetDirectoryName(path)!);
+        File.WriteAllBytes(path, new byte[2 * samples]);
+        return path;
+    }
 
     private static string At(Sandbox s, string file, string text)
     {

@@ -10,21 +10,26 @@ public class DesignOnCaptureTests
         var r = CliRunner.Run("design", RepoPaths.Example("capture_bench.toml"), "--json");
         Assert.True(r.ExitCode == 0, r.Error);
         using var doc = JsonDocument.Parse(r.Output);
-        var root = doc.RootElement;
-        Assert.Contains("capture covariance", root.GetProperty("readout").GetProperty("noise").GetProperty("capture").GetString(), StringComparison.Ordinal);
-        var schemes = root.GetProperty("schemes").EnumerateArray().ToArray();
-        Assert.Equal("optimal on the capture", schemes[2].GetProperty("label").GetString());
-        var optimal = schemes[2].GetProperty("variance_v2").GetDouble();
-        foreach (var s in schemes)
-        {
-            // Optimal on the capture minimises h'Ch for the very matrix every scheme is predicted on.
-            Assert.True(s.GetProperty("variance_v2").GetDouble() >= optimal * (1 - 1e-12));
-            Assert.Single(s.GetProperty("budget").EnumerateArray());
-        }
+        var (schemes, optimal) = OptimalOnTheCapture(doc.RootElement);
+        Assert.All(schemes, s => Assert.Single(s.GetProperty("budget").EnumerateArray()));
 
         // The example carries an interference tone the parametric model lacks: the capture optimum must gain clearly.
         Assert.True(schemes[0].GetProperty("variance_v2").GetDouble() > 1.2 * optimal);
         Assert.DoesNotContain("CG1309", r.Error, StringComparison.Ordinal);
+    }
+
+    /// <summary>
+    /// The schemes of a `design --json` on a capture and the variance of "optimal on the capture", which minimises h'Ch
+    /// for the very matrix every scheme is predicted on.
+    /// </summary>
+    internal static (JsonElement[] Schemes, double Optimal) OptimalOnTheCapture(JsonElement root)
+    {
+        Assert.Contains("capture covariance", root.GetProperty("readout").GetProperty("noise").GetProperty("capture").GetString(), StringComparison.Ordinal);
+        var schemes = root.GetProperty("schemes").EnumerateArray().ToArray();
+        Assert.Equal("optimal on the capture", schemes[2].GetProperty("label").GetString());
+        var optimal = schemes[2].GetProperty("variance_v2").GetDouble();
+        Assert.All(schemes, s => Assert.True(s.GetProperty("variance_v2").GetDouble() >= optimal * (1 - 1e-12)));
+        return (schemes, optimal);
     }
 
     [Fact]

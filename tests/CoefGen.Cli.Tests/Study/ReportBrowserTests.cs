@@ -100,6 +100,15 @@ public partial class ReportBrowserTests
     }
 
     [Fact]
+    public async Task The_report_of_a_two_stage_design_keeps_its_tables_and_proof_on_the_page()
+    {
+        var chromium = RequireChromium();
+        var html = ReportCommandTests.ReportOf(RepoPaths.Example(Path.Combine("cycles", "skipper_two_stage.toml")), out var dir);
+        Assert.Contains("<h2>Two-stage datapath</h2>", html, StringComparison.Ordinal);
+        Assert.Equal("", await Probed(chromium, html, dir));
+    }
+
+    [Fact]
     public async Task The_instrument_summary_page_of_sixteen_tables_renders_and_nothing_overflows_at_1400_px()
     {
         var chromium = RequireChromium();

@@ -7,13 +7,7 @@ public sealed class ExampleCaptureTests
     [Fact]
     public void Example_capture_is_exactly_the_documented_synthesis()
     {
-        var expected = SyntheticCapture.ToRaw16(CaptureFixtures.ExampleCodes());
-        if (Environment.GetEnvironmentVariable("COEFGEN_WRITE_EXAMPLE_CAPTURE") == "1")
-        {
-            File.WriteAllBytes(CaptureFixtures.ExampleCapturePath, expected);
-        }
-
-        Assert.Equal(expected, File.ReadAllBytes(CaptureFixtures.ExampleCapturePath));
+        ExampleSynthesis.AssertFileIs(CaptureFixtures.ExampleCapturePath, SyntheticCapture.ToRaw16(CaptureFixtures.ExampleCodes()));
     }
 
     [Fact]

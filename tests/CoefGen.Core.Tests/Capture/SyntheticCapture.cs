@@ -64,6 +64,19 @@ internal sealed class SyntheticCapture(int seed)
         return codes;
     }
 
+    /// <summary>Consecutive cycles of a general readout: noise plus the same waveform (codes, one per cycle sample) in every cycle, rounded.</summary>
+    public long[] CycleCodes(Model m, int cycles, IReadOnlyList<double> waveform)
+    {
+        var x = NoiseV(m, cycles * waveform.Count);
+        var codes = new long[x.Length];
+        for (var n = 0; n < x.Length; n++)
+        {
+            codes[n] = (long)Math.Round((x[n] / m.LsbV) + waveform[n % waveform.Count], MidpointRounding.ToEven);
+        }
+
+        return codes;
+    }
+
     /// <summary>A stream of codes.</summary>
     public long[] StreamCodes(Model m, int count) =>
         [.. NoiseV(m, count).Select(v => (long)Math.Round(v / m.LsbV, MidpointRounding.ToEven))];

@@ -9,9 +9,9 @@ using CoefGen.Core.Vectors.TwoStage;
 namespace CoefGen.Core.Tests.Toolchain;
 
 /// <summary>
-/// The two-stage reference datapath (templates/ref-two-stage-datapath.v, with the shared self-checking Verilog bench) against
-/// the two-stage golden vectors: 0 mismatches in Icarus on both representative cases, a clean Verilator -Wall lint, and a
-/// corrupted table entry fails (negative control).
+/// The two-stage reference datapaths (templates/ref-two-stage-datapath.v and .vhd, with the shared self-checking benches)
+/// against the two-stage golden vectors: 0 mismatches in Icarus and GHDL on both representative cases, a clean Verilator
+/// -Wall lint, and a corrupted table entry fails both (negative control).
 /// </summary>
 public class TwoStageDatapathToolchainTests
 {
@@ -42,14 +42,24 @@ public class TwoStageDatapathToolchainTests
         return model.Prefix;
     }
 
+    private static ToolResult Ghdl(TempDir dir, string prefix, int pixels)
+    {
+        var ghdl = Tools.Require("ghdl");
+        Directory.CreateDirectory(Path.Combine(dir.Path, "work"));
+        ToolRunner.RunOk(ghdl, dir.Path, Emitted.Timeout, "-a", "--std=08", "-Werror", "--workdir=work",
+            prefix + "_two_stage_pkg.vhd", prefix + "_datapath.vhd", prefix + "_tb.vhd");
+        return ToolRunner.Run(ghdl, dir.Path, Emitted.Timeout, "-r", "--std=08", "--workdir=work", prefix + "_tb", $"-gMAX_PIXELS={pixels}");
+    }
+
     [Theory]
     [MemberData(nameof(Names))]
-    public void Two_stage_datapath_matches_every_golden_output_in_Icarus(string name)
+    public void Two_stage_datapath_matches_every_golden_output_in_Icarus_and_GHDL(string name)
     {
         var r = TwoStageCases.Named(name);
         using var dir = new TempDir();
         var prefix = Write(dir, r, 60);
         ReferenceBench.AssertPass(ReferenceBench.Icarus(dir, prefix), 60);
+        ReferenceBench.AssertPass(Ghdl(dir, prefix, 20), 20);
     }
 
     [Fact]
@@ -75,5 +85,6 @@ public class TwoStageDatapathToolchainTests
         using var dir = new TempDir();
         var prefix = Write(dir, r, 30, d with { Table = table });
         ReferenceBench.AssertFail(ReferenceBench.Icarus(dir, prefix));
+        ReferenceBench.AssertFail(Ghdl(dir, prefix, 30));
     }
 }
