@@ -16,16 +16,8 @@ public static class StageProfile
     public static void Run(string path)
     {
         var d = RepoFiles.Load(File.ReadAllBytes(path), path, _ => null);
-        var sw = Stopwatch.StartNew();
-        var cpu = Process.GetCurrentProcess().TotalProcessorTime;
-        void Lap(string what)
-        {
-            using var self = Process.GetCurrentProcess();
-            var now = self.TotalProcessorTime;
-            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{what,-28} {sw.Elapsed.TotalMilliseconds,9:F0} ms wall {(now - cpu).TotalMilliseconds,8:F0} ms cpu  ws {self.WorkingSet64 / 1048576.0,6:F0} MiB peak {self.PeakWorkingSet64 / 1048576.0,6:F0} MiB"));
-            cpu = now;
-            sw.Restart();
-        }
+        var clock = new StageClock();
+        void Lap(string what) => clock.Lap(what);
 
         var grid = SampleGrid.FromDescription(d);
         Lap("grid");

@@ -11,16 +11,8 @@ public static class VectorProfile
     public static void Run(string path, int pixels)
     {
         var d = RepoFiles.Load(File.ReadAllBytes(path), path, _ => null);
-        var sw = Stopwatch.StartNew();
-        var cpu = Process.GetCurrentProcess().TotalProcessorTime;
-        void Lap(string what)
-        {
-            using var self = Process.GetCurrentProcess();
-            var now = self.TotalProcessorTime;
-            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{what,-28} {sw.Elapsed.TotalMilliseconds,9:F0} ms wall {(now - cpu).TotalMilliseconds,8:F0} ms cpu  peak {self.PeakWorkingSet64 / 1048576.0,6:F0} MiB"));
-            cpu = now;
-            sw.Restart();
-        }
+        var clock = new StageClock();
+        void Lap(string what) => clock.Lap(what);
 
         var result = DesignPipeline.Run(d, RepoFiles.Targets());
         Lap("design");
