@@ -42,7 +42,7 @@ internal static class ReportCommand
             }
 
             using var batch = new OutputBatch();
-            if (AddPages(result, batch, dir, "", error) is not int charts || batch.Commit(error) is null)
+            if (AddPages(result, batch, dir, "", error, ReadCounts(path, result)) is not int charts || batch.Commit(error) is null)
             {
                 return ExitCodes.BadInput;
             }
@@ -86,8 +86,14 @@ internal static class ReportCommand
         return design.Tables.Select(t => UnsafeDesign.RequireSafe(t.Result, requireSafe, error)).FirstOrDefault(c => c is not null) ?? ExitCodes.Ok;
     }
 
+    /// <summary>A cycle with a read count: the cycle designed again at other read counts (null for every other readout).</summary>
+    private static ReadCountCurve? ReadCounts(string path, DesignResult result) =>
+        !result.Description.Timing.Cycle.IsClassic && InputFiles.ReadReadoutBytes(path, out _) is { } bytes
+            ? ReadCountStudy.Run(new System.Text.UTF8Encoding(false).GetString(bytes), result, SweepCommand.PointFor(path))
+            : null;
+
     /// <summary>Adds one design's report.html, report.md and charts under DIR/<paramref name="folder"/>; the chart count, or null on bad input.</summary>
-    private static int? AddPages(DesignResult result, OutputBatch batch, string dir, string folder, TextWriter error)
+    private static int? AddPages(DesignResult result, OutputBatch batch, string dir, string folder, TextWriter error, ReadCountCurve? readCounts = null)
     {
         var emitted = new List<EmittedFile>();
         var entries = result.Description.Emit.Select(e => (e.Template, e.Path)).ToList();
@@ -106,7 +112,7 @@ internal static class ReportCommand
             }
         }
 
-        var sections = DesignReport.Build(result, new ReportContext(ToolInfo.Version, emitted));
+        var sections = DesignReport.Build(result, new ReportContext(ToolInfo.Version, emitted) { ReadCounts = readCounts });
         var title = $"Design report: {result.Description.Name}";
         var charts = new List<(string Name, string Svg)>();
         var markdown = ReportMarkdown.Render(title, sections, charts);

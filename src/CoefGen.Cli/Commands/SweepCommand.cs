@@ -24,8 +24,8 @@ internal static class SweepCommand
         var csv = new Option<FileInfo?>("--csv") { Description = "Also write the sweep as CSV to this path." };
         var plot = new Option<FileInfo?>("--plot") { Description = "Also write an SVG plot of read noise against the first varied key." };
         var json = new Option<bool>("--json") { Description = "Print JSON (schema coefgen.sweep/1) instead of tables." };
-        var target = new Option<double?>("--target-noise-e") { Description = "Find the smallest equal reset/signal window count (in samples) whose read noise meets this many e- rms." };
-        var split = new Option<bool>("--split-pixel-time") { Description = "For the file's pixel cycle, find the split between reset window, dead time and signal window with the lowest read noise." };
+        var target = new Option<double?>("--target-noise-e") { Description = "Find the smallest equal reset/signal window count (in samples) whose read noise meets this many e- rms; for a cycle with repeated reads or Fowler-N groups, the smallest read count." };
+        var split = new Option<bool>("--split-pixel-time") { Description = "For the file's pixel cycle, find the split between reset window, dead time and signal window with the lowest read noise; for repeated reads, the split of one read period, taken by every read." };
         var scheme = new Option<string?>("--scheme") { Description = "Scheme the searches optimise: boxcar, weighted, optimal or robust (default: the file's weights.scheme)." };
         var cmd = new Command(
             "sweep",
@@ -102,16 +102,30 @@ internal static class SweepCommand
 
         ReadoutDescription? baseline = null;
         WeightScheme? chosen = null;
+        ReadCountAxis? readAxis = null;
         if (target is not null || split)
         {
             var baseResult = DesignRunner.TryRun(path, error);
-            // The window searches resize one reset and one signal window; a general cycle is swept by its keys (--vary).
-            if (baseResult is null || CycleRefusal.Refuse(baseResult.Description, "--target-noise-e and --split-pixel-time", error))
+            if (baseResult is null)
             {
                 return ExitCodes.BadInput;
             }
 
             baseline = baseResult.Description;
+            // A general cycle: the target search varies the read count, the split divides one read (Study/ReadCountSearch, ReadSplitSearch).
+            if (!baseline.Timing.Cycle.IsClassic)
+            {
+                if (target is not null && (readAxis = ReadCountAxis.Of(text, baseline, out var noAxis)) is null && ReadSplitSearch.Refusal(text, baseline) is { } noRead)
+                {
+                    return CycleRefusal.RefuseWith(baseline, $"--target-noise-e on a general cycle searches the read count, or the window length of a read written once; {noAxis}, and {noRead}. Sweep its keys with --vary (e.g. timing.window[0].count)", error);
+                }
+
+                if (split && ReadSplitSearch.Refusal(text, baseline) is { } noSplit)
+                {
+                    return CycleRefusal.RefuseWith(baseline, $"--split-pixel-time on a general cycle splits one read; {noSplit}; vary its windows with --vary timing.window[i].count", error);
+                }
+            }
+
             chosen = schemeWord is null ? baseline.Weights.Scheme : ParseScheme(schemeWord);
             if (chosen is null)
             {
@@ -142,8 +156,12 @@ internal static class SweepCommand
             }
         }
 
-        var targetResult = target is double x ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value) : null;
-        var splitResult = split ? PixelSplitSearch.Run(text, baseline!, point, chosen!.Value) : null;
+        var cycle = baseline is not null && !baseline.Timing.Cycle.IsClassic;
+        var targetResult = target is not double x ? null
+            : !cycle ? TargetNoiseSearch.Run(text, baseline!, point, x, chosen!.Value)
+            : readAxis is null ? ReadSplitSearch.EqualWindowTarget(text, baseline!, point, x, chosen!.Value) : null;
+        var readTarget = target is double y && readAxis is not null ? ReadCountSearch.Run(text, baseline!, readAxis, point, y, chosen!.Value) : null;
+        var splitResult = !split ? null : cycle ? ReadSplitSearch.Run(text, baseline!, point, chosen!.Value) : PixelSplitSearch.Run(text, baseline!, point, chosen!.Value);
         var wrote = new List<string>();
         if (sweep is not null && (csvPath is not null || plotPath is not null))
         {
@@ -174,7 +192,7 @@ internal static class SweepCommand
 
         if (json)
         {
-            output.Write(SweepJson.Render(sweep, targetResult, splitResult));
+            output.Write(SweepJson.Render(sweep, targetResult, splitResult, readTarget));
             return ExitCodes.Ok;
         }
 
@@ -187,6 +205,11 @@ internal static class SweepCommand
         if (targetResult is not null)
         {
             parts.Add(SweepSearchText.Target(targetResult, baseline!.Adc.RateHz));
+        }
+
+        if (readTarget is not null)
+        {
+            parts.Add(ReadCountSearchText.Target(readTarget, baseline!.Adc.RateHz));
         }
 
         if (splitResult is not null)
@@ -213,7 +236,7 @@ internal static class SweepCommand
         _ => null,
     };
 
-    private static DesignPoint PointFor(string readoutPath)
+    internal static DesignPoint PointFor(string readoutPath)
     {
         var baseDir = Path.GetDirectoryName(Path.GetFullPath(readoutPath)) ?? ".";
         return new DesignPoint(readoutPath, relative => InputFiles.ReadRelative(baseDir, relative, out _), InputFiles.LoadTargets());

@@ -10,7 +10,7 @@ internal static class SweepJson
 {
     public const string Schema = "coefgen.sweep/1";
 
-    public static string Render(SweepResult? sweep, TargetNoiseResult? target, SplitResult? split)
+    public static string Render(SweepResult? sweep, TargetNoiseResult? target, SplitResult? split, ReadCountTargetResult? readTarget = null)
     {
         using var stream = new MemoryStream();
         var options = new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping, NewLine = "\n" };
@@ -46,21 +46,14 @@ internal static class SweepJson
             if (target is not null)
             {
                 w.WriteStartObject("target_noise");
-                w.WriteNumber("target_e_rms", target.TargetElectrons);
-                w.WriteString("scheme", DesignText.SchemeWord(target.Scheme));
-                if (target.WindowCount is int n)
-                {
-                    w.WriteNumber("window_count", n);
-                }
-                else
-                {
-                    w.WriteNull("window_count");
-                }
-
-                w.WriteBoolean("monotone", target.Monotone);
-                w.WriteString("note", target.Note);
+                TargetHead(w, target.TargetElectrons, target.Scheme, null, "window_count", target.WindowCount, target.Monotone, target.Note);
                 Trials(w, "trials", target.Trials);
                 w.WriteEndObject();
+            }
+
+            if (readTarget is not null)
+            {
+                ReadCountTarget(w, readTarget);
             }
 
             if (split is not null)
@@ -68,6 +61,13 @@ internal static class SweepJson
                 w.WriteStartObject("split_pixel_time");
                 w.WriteString("scheme", DesignText.SchemeWord(split.Scheme));
                 w.WriteNumber("pixel_samples", split.PixelSamples);
+                if (split.ReadPeriodSamples is int period)
+                {
+                    // A general cycle: the split fills one read period, and every read takes it.
+                    w.WriteNumber("read_period_samples", period);
+                    w.WriteNumber("read_count", split.ReadCount);
+                }
+
                 w.WriteNumber("trial_count", split.TrialCount);
                 w.WriteString("note", split.Note);
                 Trials(w, "best", split.Best is null ? [] : [split.Best]);
@@ -79,6 +79,48 @@ internal static class SweepJson
         }
 
         return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+    }
+
+    /// <summary>The target search of a general cycle, over the read count: the shape of the two-window "target_noise" with N in reads.</summary>
+    private static void ReadCountTarget(Utf8JsonWriter w, ReadCountTargetResult r)
+    {
+        w.WriteStartObject("target_noise");
+        TargetHead(w, r.TargetElectrons, r.Scheme, r.Axis.Key, "read_count", r.Reads, r.Monotone, r.Note);
+        w.WriteStartArray("trials");
+        foreach (var t in r.Trials)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("read_count", t.Reads);
+            w.WriteNumber("cycle_pixel_samples", t.PixelSamples);
+            Outcome(w, t.Outcome);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteEndObject();
+    }
+
+    /// <summary>The members of "target_noise" before its trials; <paramref name="varies"/> only for a general cycle.</summary>
+    private static void TargetHead(Utf8JsonWriter w, double targetElectrons, CoefGen.Core.Readout.WeightScheme scheme, string? varies, string countName, int? count, bool monotone, string note)
+    {
+        w.WriteNumber("target_e_rms", targetElectrons);
+        w.WriteString("scheme", DesignText.SchemeWord(scheme));
+        if (varies is not null)
+        {
+            w.WriteString("varies", varies);
+        }
+
+        if (count is int n)
+        {
+            w.WriteNumber(countName, n);
+        }
+        else
+        {
+            w.WriteNull(countName);
+        }
+
+        w.WriteBoolean("monotone", monotone);
+        w.WriteString("note", note);
     }
 
     private static void Trials(Utf8JsonWriter w, string name, IEnumerable<WindowTrial> trials)

@@ -34,6 +34,16 @@ internal static class SweepSearchText
         }
 
         var b = r.Best.Layout;
+        if (r.ReadPeriodSamples is int period)
+        {
+            sb.Append($"split of each read's {Eng.Int(period)}-sample period ({Eng.Si(period / rateHz, "s")}, {Eng.Int(r.ReadCount)} reads, {scheme}): " +
+                      $"pedestal {Eng.Int(b.ResetCount)}, dead time {Eng.NumShort(b.DeadSamples, 6)} ({Eng.Si(b.DeadSamples / rateHz, "s")}), signal {Eng.Int(b.SignalCount)} samples " +
+                      $"-> {Eng.Num(r.Best.Outcome.NoiseOf(r.Scheme))} e- rms\n");
+            sb.Append($"  {r.Note}; every read takes the split; neighbours move one sample between a window and the dead time\n");
+            sb.Append(Table([r.Best, .. r.Neighbours], r.Scheme, t => ReferenceEquals(t, r.Best), _ => "", null));
+            return sb.ToString();
+        }
+
         sb.Append($"split of the {Eng.Int(r.PixelSamples)}-sample pixel cycle ({Eng.Si(r.PixelSamples / rateHz, "s")}, {scheme}): " +
                   $"reset {Eng.Int(b.ResetCount)}, dead time {Eng.NumShort(b.DeadSamples, 6)} ({Eng.Si(b.DeadSamples / rateHz, "s")}), signal {Eng.Int(b.SignalCount)} samples " +
                   $"-> {Eng.Num(r.Best.Outcome.NoiseOf(r.Scheme))} e- rms\n");
@@ -46,7 +56,7 @@ internal static class SweepSearchText
         t.Outcome.Valid ? (t.Outcome.NoiseOf(r.Scheme) <= r.TargetElectrons ? "meets" : "above") : "";
 
     /// <summary>The noise with 4 figures, or with as many more as it takes to differ from the target it is compared with.</summary>
-    private static string Against(double noise, double? target)
+    internal static string Against(double noise, double? target)
     {
         var digits = 4;
         while (target is double t && noise != t && Eng.Num(noise, digits) == Eng.Num(t, digits) && digits < 12)

@@ -46,6 +46,9 @@ public static class ChartPalette
     /// <summary>A reference curve drawn beside the schemes (each scenario's own optimum).</summary>
     public static readonly ChartStyle Reference = new("#5a5a5a", "2 2 8 2");
 
+    /// <summary>The two-stage form of repeated reads, drawn beside the schemes (at least 26 CIELAB units from each of them and from <see cref="Reference"/> under the four visions).</summary>
+    public static readonly ChartStyle TwoStage = new("#07a364", "6 3 1 3 1 3", 2.2);
+
     /// <summary>Markers (transfer instant) and other annotations.</summary>
     public const string Annotation = "#444444";
 

@@ -23,6 +23,7 @@ public static class DesignReport
         (r, _) => Sources(r),
         (r, _) => Noise(r),
         (r, _) => RegretReportSection.For(r) is [var regret] ? regret : null,
+        (r, c) => ReadCountReportSection.For(r, c),
         (r, _) => ReportCharts.Weights(r),
         (r, _) => ReportCharts.Spectra(r),
         (r, _) => ReportCharts.Contribution(r),

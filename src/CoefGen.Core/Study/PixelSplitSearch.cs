@@ -19,8 +19,15 @@ public static class PixelSplitSearch
         ArgumentNullException.ThrowIfNull(baseText);
         ArgumentNullException.ThrowIfNull(baseline);
         ArgumentNullException.ThrowIfNull(point);
-        var layout = WindowLayout.Of(baseline);
-        var pixel = baseline.Timing.PixelSamples;
+        return Run(baseText, WindowLayout.Of(baseline), baseline.Timing.PixelSamples, (WindowLayout l, string t, out string? e) => l.Apply(t, out e), baseline.SourcePath, point, scheme, maxParallelism);
+    }
+
+    /// <summary>
+    /// The search on any layout of <paramref name="pixel"/> samples (lead-in, gap to the transfer and tail fixed), written
+    /// into the text by <paramref name="write"/>: the classic pixel cycle, or one read of a general cycle.
+    /// </summary>
+    internal static SplitResult Run(string baseText, WindowLayout layout, int pixel, LayoutWriter write, string sourcePath, DesignPoint point, WeightScheme scheme, int? maxParallelism)
+    {
         var budget = pixel - layout.LeadSamples - layout.TailSamples - layout.TransferGapSamples;
         var room = (int)Math.Floor(budget + 1e-9);
         if (room < 2)
@@ -40,9 +47,9 @@ public static class PixelSplitSearch
             Parallel.For(0, todo.Length, new ParallelOptions { MaxDegreeOfParallelism = maxParallelism ?? Environment.ProcessorCount }, i =>
             {
                 var l = LayoutFor(todo[i].R, todo[i].S);
-                var text = l.Apply(baseText, out var error);
+                var text = write(l, baseText, out var error);
                 results[i] = new WindowTrial(l, text is null
-                    ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG6001", Diagnostics.SourceLocation.FileOnly(baseline.SourcePath), error ?? "cannot edit the timing")])
+                    ? PointOutcome.Invalid([Diagnostics.Diagnostic.Error("CG6001", Diagnostics.SourceLocation.FileOnly(sourcePath), error ?? "cannot edit the timing")])
                     : point.Evaluate(text));
             });
             for (var i = 0; i < todo.Length; i++)

@@ -10,4 +10,11 @@ public sealed record SplitResult(
     WindowTrial? Best,
     IReadOnlyList<WindowTrial> Neighbours,
     int TrialCount,
-    string Note);
+    string Note)
+{
+    /// <summary>For one read of a general cycle (<see cref="ReadSplitSearch"/>): the read period the split fills; null for the classic pixel cycle.</summary>
+    public int? ReadPeriodSamples { get; init; }
+
+    /// <summary>For one read of a general cycle: how many reads repeat that split.</summary>
+    public int ReadCount { get; init; } = 1;
+}

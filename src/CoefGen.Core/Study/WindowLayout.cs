@@ -45,17 +45,6 @@ public sealed record WindowLayout(int LeadSamples, int ResetCount, double Transf
             ("timing.signal.start", SignalStart),
             ("timing.signal.count", SignalCount),
         };
-        string? edited = text;
-        error = null;
-        foreach (var (key, value) in edits)
-        {
-            edited = ReadoutTextEditor.SetNumber(edited, key, value, out error);
-            if (edited is null)
-            {
-                return null;
-            }
-        }
-
-        return edited;
+        return TextEdits.Apply(text, edits, out error);
     }
 }

@@ -9,7 +9,7 @@ namespace CoefGen.Cli.Tests.Study;
 
 public partial class ReportCommandTests
 {
-    public static readonly TheoryData<string> Examples = ["fast_imaging.toml", "slowscan_spectro.toml", "ir_measured.toml", "capture_bench.toml", "slowscan_robust.toml"];
+    public static readonly TheoryData<string> Examples = ["fast_imaging.toml", "slowscan_spectro.toml", "ir_measured.toml", "capture_bench.toml", "slowscan_robust.toml", "cycles/cms_rows.toml", "cycles/up_the_ramp.toml"];
 
     [GeneratedRegex("<td(?: class=\"raw\")? data-json=\"([^\"]+)\"(?: data-value=\"([^\"]+)\")?>(.*?)</td>")]
     private static partial Regex KeyedCell();

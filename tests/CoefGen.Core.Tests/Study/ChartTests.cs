@@ -39,7 +39,7 @@ public class ChartTests
     [Fact]
     public void Every_palette_entry_has_its_own_dash_pattern()
     {
-        var all = ChartPalette.Schemes.Concat(ChartPalette.Sources).Append(ChartPalette.Total).Append(ChartPalette.Digital).Append(ChartPalette.Model).Append(ChartPalette.AdcNoise).Append(ChartPalette.Reference).ToList();
+        var all = ChartPalette.Schemes.Concat(ChartPalette.Sources).Append(ChartPalette.Total).Append(ChartPalette.Digital).Append(ChartPalette.Model).Append(ChartPalette.AdcNoise).Append(ChartPalette.Reference).Append(ChartPalette.TwoStage).ToList();
         Assert.Equal(all.Count, all.Select(s => s.Dash).Distinct().Count() + 1); // the optimal scheme and the total are both solid, never in one chart
         Assert.Equal(all.Count, all.Select(s => s.Colour).Distinct().Count());
     }
@@ -57,7 +57,10 @@ public class ChartTests
         Assert.True(ColourVision.MinDistance(schemes) >= 20, $"schemes {ColourVision.MinDistance(schemes)}");
         Assert.True(ColourVision.MinDistance(sources) >= 25, $"sources {ColourVision.MinDistance(sources)}");
         Assert.True(ColourVision.MinDistance([ChartPalette.Total.Colour, ChartPalette.Model.Colour]) >= 20);
-        foreach (var c in schemes.Concat(sources))
+        // The two-stage form is drawn with the schemes and the reference law (read noise against read count).
+        Assert.True(ColourVision.MinDistance([.. schemes, ChartPalette.TwoStage.Colour]) >= 20);
+        Assert.True(ColourVision.MinDistance([ChartPalette.TwoStage.Colour, ChartPalette.Reference.Colour]) >= 20);
+        foreach (var c in schemes.Concat(sources).Append(ChartPalette.TwoStage.Colour))
         {
             Assert.True(ColourVision.MinDistance([c, "#ffffff"]) >= 30, $"{c} too close to the white background");
         }
