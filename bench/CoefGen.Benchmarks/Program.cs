@@ -15,9 +15,14 @@ using CoefGen.Core.Weights.Structured;
 //   peak n             one structured solve of 2 x n in this process: time, iterations, allocated bytes, peak working set
 //   twostage [N m n]   Stopwatch: the two-stage design of N reads x 2 x m (default 1000 x 2 x 64); dense vs two-stage at n reads
 //   design             BenchmarkDotNet: the whole DesignPipeline.Run of each shipped example and of a 2x4096 readout
+//   design-scale [n]   Stopwatch: examples/cycles/skipper_1000.toml through `coefgen design` (child process: wall, CPU, peak RSS)
+//                      and DesignPipeline.Run; dense vs structured on the same readout cut to n reads (default 16)
+//   stages file        Stopwatch around each design stage of one readout file (profiling aid)
+//   vectors-profile file n   Stopwatch around the stages of `vectors` (profiling aid)
+//   fft L reps         CPU time of one FFT pair of length L
 MathNet.Numerics.Control.UseManaged();
 var mode = args.Length > 0 ? args[0] : "bench";
-var sizes = args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).ToArray();
+var sizes = mode is "stages" or "vectors-profile" ? [] : args.Skip(1).Select(a => int.Parse(a, CultureInfo.InvariantCulture)).ToArray();
 switch (mode)
 {
     case "bench":
@@ -113,8 +118,25 @@ switch (mode)
         TwoStageScale.Run(sizes.Length > 0 ? sizes[0] : 1000, sizes.Length > 1 ? sizes[1] : 64, sizes.Length > 2 ? sizes[2] : 16);
         break;
 
+    case "fft":
+        FftProbe.Run(sizes[0], sizes[1]);
+        break;
+
+    case "design-scale":
+        // The whole design of the 1000-read example (child coefgen process and in-process), then dense vs structured at n reads.
+        DesignScale.Run(sizes.Length > 0 ? sizes[0] : 16);
+        break;
+
+    case "vectors-profile":
+        VectorProfile.Run(args[1], int.Parse(args[2], CultureInfo.InvariantCulture));
+        break;
+
+    case "stages":
+        StageProfile.Run(args[1]);
+        break;
+
     default:
-        Console.Error.WriteLine("modes: bench | design | precond [n...] | crossover [n...] | peak n | twostage [reads perWindow compareReads]");
+        Console.Error.WriteLine("modes: bench | design | design-scale [n] | precond [n...] | crossover [n...] | peak n | twostage [reads perWindow compareReads] | stages file | vectors-profile file n | fft L reps");
         return 2;
 }
 

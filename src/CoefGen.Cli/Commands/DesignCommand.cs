@@ -36,7 +36,15 @@ internal static class DesignCommand
                 return ExitCodes.BadInput;
             }
 
-            output.Write(parse.GetValue(json) ? DesignJson.Render(result) : DesignText.Render(result, parse.GetValue(weights)));
+            if (parse.GetValue(json))
+            {
+                DesignJson.Write(output, result);
+            }
+            else
+            {
+                output.Write(DesignText.Render(result, parse.GetValue(weights)));
+            }
+
             return UnsafeDesign.RequireSafe(result, parse.GetValue(requireSafe), error) ?? ExitCodes.Ok;
         });
         return cmd;

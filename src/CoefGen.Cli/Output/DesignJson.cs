@@ -1,6 +1,7 @@
-using System.Text;
+using System.Globalization;
 using System.Text.Encodings.Web;
 using System.Text.Json;
+using CoefGen.Cli.Io;
 using CoefGen.Core.FixedPoint;
 using CoefGen.Core.Pipeline;
 using CoefGen.Core.Readout;
@@ -15,10 +16,21 @@ internal static class DesignJson
 {
     public const string Schema = "coefgen.design/1";
 
+    /// <summary>Pending bytes above which <see cref="Numbers"/> hands them to the stream.</summary>
+    private const int FlushBytes = 1 << 16;
+
     public static string Render(DesignResult r)
     {
-        using var stream = new MemoryStream();
+        using var text = new StringWriter(CultureInfo.InvariantCulture);
+        Write(text, r);
+        return text.ToString();
+    }
+
+    /// <summary>Streams the document onto <paramref name="output"/> (the weight arrays are flushed as they are written).</summary>
+    public static void Write(TextWriter output, DesignResult r)
+    {
         var options = new JsonWriterOptions { Indented = true, Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping, NewLine = "\n" };
+        using var stream = new TextWriterStream(output);
         using (var w = new Utf8JsonWriter(stream, options))
         {
             w.WriteStartObject();
@@ -40,7 +52,7 @@ internal static class DesignJson
             w.WriteEndObject();
         }
 
-        return Encoding.UTF8.GetString(stream.ToArray()) + "\n";
+        output.Write("\n");
     }
 
     private static void Readout(Utf8JsonWriter w, DesignResult r)
@@ -211,6 +223,11 @@ internal static class DesignJson
         w.WriteStartArray(name);
         foreach (var v in values)
         {
+            if (w.BytesPending > FlushBytes)
+            {
+                w.Flush(); // into the output as it goes: no whole-document buffer for 128 000 weights
+            }
+
             if (integers)
             {
                 w.WriteNumberValue((long)v);

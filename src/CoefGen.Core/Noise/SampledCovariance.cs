@@ -10,6 +10,7 @@ namespace CoefGen.Core.Noise;
 public sealed class SampledCovariance
 {
     private readonly int[] _index;
+    private Weights.Structured.Fft? _fft;
 
     public SampledCovariance(IReadOnlyList<int> sampleIndex, IReadOnlyList<CovarianceComponent> components, double digitalVarianceV2)
     {
@@ -189,7 +190,8 @@ public sealed class SampledCovariance
             re[_index[i] - _index[0]] = h[i];
         }
 
-        var fft = new Weights.Structured.Fft(length);
+        // The transform's tables depend on the length only; they are made once per covariance and only read after.
+        var fft = _fft is { } made && made.Length == length ? made : _fft = new Weights.Structured.Fft(length);
         fft.Forward(re, im);
         for (var k = 0; k < length; k++)
         {

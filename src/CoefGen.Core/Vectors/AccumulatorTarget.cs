@@ -19,6 +19,8 @@ internal sealed class AccumulatorTarget
 
     private readonly (int I, int J)[] _pairs;
     private readonly int[] _byMagnitude;
+    private readonly long[] _magnitudes;
+    private readonly int _pairStart;
 
     /// <param name="design">The integer design.</param>
     /// <param name="baselineSample">The signed sample every weighted sample starts from (the baseline level).</param>
@@ -46,6 +48,9 @@ internal sealed class AccumulatorTarget
         Step = pairs.Count == 0 ? 0 : pairs.Min(p => p.G);
         _pairs = [.. pairs.Where(p => p.G == Step).OrderBy(p => p.Opposite ? 0 : 1).ThenBy(p => p.Size).ThenBy(p => p.I).ThenBy(p => p.J).Take(MaxPairs).Select(p => (p.I, p.J))];
         _byMagnitude = [.. Enumerable.Range(0, c.Count).Where(k => c[k] != 0).OrderByDescending(k => Math.Abs(c[k])).ThenBy(k => k)];
+        _magnitudes = [.. _byMagnitude.Select(k => Math.Abs(c[k]))];
+        var reserved = _pairs.SelectMany(p => new[] { p.I, p.J }).ToHashSet();
+        _pairStart = reserved.Count == 0 ? _byMagnitude.Length : Array.FindIndex(_byMagnitude, reserved.Contains);
         BaselineAccumulator = c.Aggregate(Int128.Zero, (s, x) => s + ((Int128)x * baselineSample));
         Int128 up = _max - baselineSample, down = _min - baselineSample;
         Highest = BaselineAccumulator + c.Aggregate(Int128.Zero, (s, x) => s + (x > 0 ? x * up : x * down));
@@ -70,9 +75,16 @@ internal sealed class AccumulatorTarget
             return null;
         }
 
+        // The greedy pass is the same for every reserved pair up to the first coefficient any pair holds back, so that
+        // prefix is walked once and each pair continues from it.
+        var moved = new List<(int K, long By)>();
+        var (r, from) = Greedy(target - BaselineAccumulator, 0, _pairStart, -1, -1, moved);
+        var shared = moved.Count;
         foreach (var (i, j) in _pairs)
         {
-            if (Reach(target, i, j) is { } x)
+            moved.RemoveRange(shared, moved.Count - shared);
+            var (rest, _) = Greedy(r, from, _byMagnitude.Length, i, j, moved);
+            if (Solve(rest, i, j, moved) is { } x)
             {
                 return x;
             }
@@ -81,23 +93,41 @@ internal sealed class AccumulatorTarget
         return null;
     }
 
-    private long[]? Reach(Int128 target, int i, int j)
+    /// <summary>
+    /// The greedy moves over positions [from, to) of the magnitude order (skipping i and j) from remainder r; returns the
+    /// remainder and where the pass stopped.
+    /// </summary>
+    private (Int128 Remainder, int Stop) Greedy(Int128 r, int from, int to, int i, int j, List<(int K, long By)> moved)
     {
         var c = _design.Coefficients;
-        var x = Enumerable.Repeat(_baseline, c.Count).ToArray();
-        var r = target - BaselineAccumulator;
-        foreach (var k in _byMagnitude)
+        var pos = from;
+        for (; pos < to; pos++)
         {
+            // Largest magnitude first: while 2|r| < |c_k| the rounded quotient is 0 and the sample stays, so jump to
+            // the first coefficient small enough to move (a binary search; the same moves as visiting every one).
+            pos = Math.Min(to, FirstAtMost(pos, 2 * Int128.Abs(r)));
+            if (pos == to)
+            {
+                break;
+            }
+
+            var k = _byMagnitude[pos];
             if (k == i || k == j)
             {
                 continue;
             }
 
             var want = Int128.Clamp(RoundDiv(r, c[k]), _min - _baseline, _max - _baseline);
-            x[k] += (long)want;
+            moved.Add((k, (long)want));
             r -= want * c[k];
         }
 
+        return (r, pos);
+    }
+
+    private long[]? Solve(Int128 r, int i, int j, List<(int K, long By)> moved)
+    {
+        var c = _design.Coefficients;
         var (ci, cj) = ((Int128)c[i], (Int128)c[j]);
         var g = (Int128)Gcd(c[i], c[j]);
         if (r % g != 0)
@@ -122,6 +152,12 @@ internal sealed class AccumulatorTarget
             var v = rest / cj;
             if (rest % cj == 0 && v >= lo && v <= hi)
             {
+                var x = Enumerable.Repeat(_baseline, c.Count).ToArray();
+                foreach (var (k, by) in moved)
+                {
+                    x[k] += by;
+                }
+
                 x[i] += (long)u;
                 x[j] += (long)v;
                 return x;
@@ -129,6 +165,26 @@ internal sealed class AccumulatorTarget
         }
 
         return null;
+    }
+
+    /// <summary>The first position at or after <paramref name="from"/> whose |c| is at most <paramref name="bound"/> (the magnitudes descend).</summary>
+    private int FirstAtMost(int from, Int128 bound)
+    {
+        int lo = from, hi = _magnitudes.Length;
+        while (lo < hi)
+        {
+            var mid = lo + ((hi - lo) / 2);
+            if (_magnitudes[mid] <= bound)
+            {
+                hi = mid;
+            }
+            else
+            {
+                lo = mid + 1;
+            }
+        }
+
+        return lo;
     }
 
     private static Int128 RoundDiv(Int128 a, long b)

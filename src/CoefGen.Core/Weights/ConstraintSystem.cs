@@ -6,24 +6,49 @@ namespace CoefGen.Core.Weights;
 /// t' is the sample time centred on its mean and scaled to unit rms, so the drift column is as well
 /// scaled as the others; with sum h = 0 the centring does not change sum h t, and b_t = 0 makes the
 /// scale irrelevant.
+/// The group indicator columns are kept implicit (<see cref="Group"/>: one group per row, the columns come first)
+/// so that a cycle of 1000 reset groups does not hold 1000 columns of N entries; <see cref="Columns"/> makes them
+/// on demand for the dense solvers.
 /// </summary>
 internal sealed class ConstraintSystem
 {
+    private double[][]? _columns;
+
     private ConstraintSystem(double[][] columns, double[] rhs)
     {
-        Columns = columns;
+        _columns = columns;
+        DenseColumns = columns;
         Rhs = rhs;
+        Rows = columns[0].Length;
     }
 
-    /// <summary>The m columns of A, each of length N.</summary>
-    public double[][] Columns { get; }
+    private ConstraintSystem(int[] group, int groupCount, double[][] denseColumns, double[] rhs)
+    {
+        Group = group;
+        GroupCount = groupCount;
+        DenseColumns = denseColumns;
+        Rhs = rhs;
+        Rows = group.Length;
+    }
+
+    /// <summary>The m columns of A, each of length N (the group indicators made here when implicit).</summary>
+    public double[][] Columns => _columns ??= [.. IndicatorColumns(), .. DenseColumns];
+
+    /// <summary>Reset group of each row when the first <see cref="GroupCount"/> columns are group indicators; else null.</summary>
+    public int[]? Group { get; }
+
+    /// <summary>Number of implicit indicator columns (0 when <see cref="Group"/> is null).</summary>
+    public int GroupCount { get; }
+
+    /// <summary>The columns after the indicators (all columns when there are none).</summary>
+    public double[][] DenseColumns { get; }
 
     /// <summary>The right-hand side b (length m).</summary>
     public double[] Rhs { get; }
 
-    public int Rows => Columns[0].Length;
+    public int Rows { get; }
 
-    public int Constraints => Columns.Length;
+    public int Constraints => GroupCount + DenseColumns.Length;
 
     /// <summary>Any constraint set A^T h = b (small problems of the two-stage design).</summary>
     public static ConstraintSystem Of(double[][] columns, double[] rhs) => new(columns, rhs);
@@ -56,26 +81,40 @@ internal sealed class ConstraintSystem
     private static ConstraintSystem Grouped(SampleGrid grid, double[] step, bool rejectDrift)
     {
         var groups = grid.GroupCount;
-        var columns = new List<double[]>(groups + 2);
-        for (var g = 0; g < groups; g++)
-        {
-            columns.Add(new double[grid.Count]);
-        }
-
+        var group = new int[grid.Count];
         for (var i = 0; i < grid.Count; i++)
         {
-            columns[grid.Group[i]][i] = 1.0;
+            group[i] = grid.Group[i];
         }
 
-        columns.Add(step);
         var rhs = new double[groups + (rejectDrift ? 2 : 1)];
         rhs[groups] = 1.0;
-        if (rejectDrift)
+        double[][] dense = rejectDrift ? [step, CentredTime(grid)] : [step];
+        return new ConstraintSystem(group, groups, dense, rhs);
+    }
+
+    private IEnumerable<double[]> IndicatorColumns()
+    {
+        if (Group is null)
         {
-            columns.Add(CentredTime(grid));
+            yield break;
         }
 
-        return new ConstraintSystem([.. columns], rhs);
+        var columns = new double[GroupCount][];
+        for (var g = 0; g < GroupCount; g++)
+        {
+            columns[g] = new double[Rows];
+        }
+
+        for (var i = 0; i < Rows; i++)
+        {
+            columns[Group[i]][i] = 1.0;
+        }
+
+        foreach (var c in columns)
+        {
+            yield return c;
+        }
     }
 
     /// <summary>Sample times centred on their mean and scaled to unit rms (all zero for one sample).</summary>
@@ -114,13 +153,14 @@ internal sealed class ConstraintSystem
     /// <summary>The same system with every row i scaled by <paramref name="rowScale"/>[i].</summary>
     public ConstraintSystem ScaleRows(IReadOnlyList<double> rowScale)
     {
-        var cols = new double[Columns.Length][];
+        var columns = Columns;
+        var cols = new double[columns.Length][];
         for (var c = 0; c < cols.Length; c++)
         {
             cols[c] = new double[Rows];
             for (var i = 0; i < Rows; i++)
             {
-                cols[c][i] = Columns[c][i] * rowScale[i];
+                cols[c][i] = columns[c][i] * rowScale[i];
             }
         }
 

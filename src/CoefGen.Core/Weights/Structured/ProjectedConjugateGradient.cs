@@ -80,6 +80,9 @@ internal sealed class ProjectedConjugateGradient
         return Outcome.IterationCap;
     }
 
+    /// <summary>R x of the last <see cref="TrueResidual"/> (or the running product of the last <see cref="Run"/>).</summary>
+    public double[] LastProduct => _rx;
+
     /// <summary>‖P R x‖ / ‖R x‖ with R x recomputed from scratch.</summary>
     public double TrueResidual(double[] x)
     {

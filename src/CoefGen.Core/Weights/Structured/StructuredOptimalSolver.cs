@@ -49,13 +49,30 @@ public static class StructuredOptimalSolver
             throw new ArgumentException("covariance has no samples", nameof(r));
         }
 
+        return Solve(r, new ConstraintProjector(constraintColumns, rhs, r.Count), preconditioner, relativeTolerance, maxIterations);
+    }
+
+    /// <summary>As the public solve, with the constraints of a <see cref="ConstraintSystem"/> (group indicators kept implicit).</summary>
+    internal static StructuredSolution Solve(SampledCovariance r, ConstraintSystem system, double relativeTolerance = 1e-13, int maxIterations = DefaultMaxIterations)
+    {
+        ArgumentNullException.ThrowIfNull(r);
+        ArgumentNullException.ThrowIfNull(system);
+        if (r.Count < 1)
+        {
+            throw new ArgumentException("covariance has no samples", nameof(r));
+        }
+
+        var projector = new ConstraintProjector(system.Group, system.GroupCount, system.DenseColumns, system.Rhs, r.Count);
+        return Solve(r, projector, PreconditionerKind.TChanCirculant, relativeTolerance, maxIterations);
+    }
+
+    private static StructuredSolution Solve(SampledCovariance r, ConstraintProjector projector, PreconditionerKind preconditioner, double relativeTolerance, int maxIterations)
+    {
         if (!(relativeTolerance > 0) || maxIterations < 0)
         {
             throw new ArgumentException("tolerance must be > 0 and the iteration cap >= 0");
         }
 
-        var n = r.Count;
-        var projector = new ConstraintProjector(constraintColumns, rhs, n);
         var positions = Positions(r.SampleIndex);
         var lag = SpanLags(r.TotalLag, positions[^1] + 1, projector.ContainsOnes());
         var op = new SymmetricToeplitzOperator(lag, positions, r.DigitalVarianceV2);
@@ -93,9 +110,7 @@ public static class StructuredOptimalSolver
 
         projector.Restore(x);
         var residual = pcg.TrueResidual(x);
-        var rx = new double[n];
-        op.Apply(x, rx);
-        var variance = ConstraintProjector.Dot(x, rx);
+        var variance = ConstraintProjector.Dot(x, pcg.LastProduct); // R x of the residual just computed
         if (failure is null && residual > relativeTolerance)
         {
             failure = string.Create(CultureInfo.InvariantCulture, $"relative residual {residual:G3} above {relativeTolerance:G3}");

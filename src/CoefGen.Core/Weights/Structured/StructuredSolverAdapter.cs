@@ -13,7 +13,7 @@ public sealed class StructuredSolverAdapter : IOptimalSolver
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(r);
         var system = ConstraintSystem.FromGrid(grid, rejectDrift);
-        var solution = StructuredOptimalSolver.Solve(r, system.Columns, system.Rhs);
+        var solution = StructuredOptimalSolver.Solve(r, system);
         if (!solution.Converged)
         {
             throw new CovarianceNotPositiveDefiniteException($"structured solver did not converge: {solution.Failure}");

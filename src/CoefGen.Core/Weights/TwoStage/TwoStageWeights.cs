@@ -32,7 +32,7 @@ public static class TwoStageWeights
 
         var n = layout.Reads;
         var m = layout.PerRead;
-        var blocks = Blocks(layout, r);
+        var blocks = new ReadBlocks(layout, r);
         var step = new double[n][];
         for (var j = 0; j < n; j++)
         {
@@ -75,50 +75,19 @@ public static class TwoStageWeights
         return h;
     }
 
-    /// <summary>T_d[p, q] = R(read j+d entry p, read j entry q) for d = 0 .. N-1, row-major m x m.</summary>
-    private static double[][] Blocks(ReadLayout layout, SampledCovariance r)
-    {
-        var m = layout.PerRead;
-        var lag = r.TotalLag;
-        var blocks = new double[layout.Reads][];
-        for (var d = 0; d < layout.Reads; d++)
-        {
-            var t = new double[m * m];
-            for (var p = 0; p < m; p++)
-            {
-                for (var q = 0; q < m; q++)
-                {
-                    t[(p * m) + q] = lag[Math.Abs((d * layout.Period) + layout.Offsets[p] - layout.Offsets[q])] + (d == 0 && p == q ? r.DigitalVarianceV2 : 0.0);
-                }
-            }
-
-            blocks[d] = t;
-        }
-
-        return blocks;
-    }
-
-    private static double[] SolveTable(double[][] blocks, double[][] step, double[] a, IReadOnlyList<int[]> classes, int m)
+    private static double[] SolveTable(ReadBlocks blocks, double[][] step, double[] a, IReadOnlyList<int[]> classes, int m)
     {
         var n = a.Length;
-        var c = new double[m * m];
+        var cd = new double[n];
         for (var d = 0; d < n; d++)
         {
-            var cd = 0.0;
             for (var l = 0; l + d < n; l++)
             {
-                cd += a[l + d] * a[l];
-            }
-
-            var t = blocks[d];
-            for (var p = 0; p < m; p++)
-            {
-                for (var q = 0; q < m; q++)
-                {
-                    c[(p * m) + q] += d == 0 ? cd * t[(p * m) + q] : cd * (t[(p * m) + q] + t[(q * m) + p]);
-                }
+                cd[d] += a[l + d] * a[l];
             }
         }
+
+        var c = blocks.TableMatrix(cd);
 
         // sum g = 0 over each reset class (ReadLayout.ResetClasses): every reset group's offset cancels.
         var offsets = classes.Select(c =>
@@ -143,28 +112,10 @@ public static class TwoStageWeights
         return DenseNullSpaceSolver.SolveOnMatrix(ConstraintSystem.Of([.. offsets, gain], [.. offsets.Select(_ => 0.0), 1.0]), c);
     }
 
-    private static double[] SolveReadWeights(double[][] blocks, double[][] step, double[] g, int n)
+    private static double[] SolveReadWeights(ReadBlocks blocks, double[][] step, double[] g, int n)
     {
         var m = g.Length;
-        var tau = new double[n];
-        for (var d = 0; d < n; d++)
-        {
-            var t = blocks[d];
-            var s = 0.0;
-            for (var p = 0; p < m; p++)
-            {
-                var row = 0.0;
-                for (var q = 0; q < m; q++)
-                {
-                    row += t[(p * m) + q] * g[q];
-                }
-
-                s += g[p] * row;
-            }
-
-            tau[d] = s;
-        }
-
+        var tau = blocks.ReadCovariance(g);
         var c = new double[n * n];
         for (var j = 0; j < n; j++)
         {
