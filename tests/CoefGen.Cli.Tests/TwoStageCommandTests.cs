@@ -1,3 +1,4 @@
+using CoefGen.Core.Formatting;
 using System.Text.Json;
 
 namespace CoefGen.Cli.Tests;
@@ -40,6 +41,28 @@ public class TwoStageCommandTests
         var integer = doc.RootElement.GetProperty("two_stage").GetProperty("integer");
         Assert.Equal(48, integer.GetProperty("per_read_table").GetArrayLength());
         Assert.Equal(64, integer.GetProperty("read_weights").GetArrayLength());
+    }
+
+    /// <summary>The penalty line names the full optimum by scheme: with [scenarios] the robust scheme comes last.</summary>
+    [Fact]
+    public void The_two_stage_penalty_is_against_the_optimal_scheme_when_a_robust_scheme_is_chosen()
+    {
+        var text = File.ReadAllText(RepoPaths.Example(Path.Combine("cycles", "skipper_reads.toml")))
+            .Replace("scheme = \"optimal\"", "scheme = \"robust\"", StringComparison.Ordinal)
+            + "\n[scenarios]\nobjective = \"regret\"\n\n[scenarios.range]\n\"noise.source[0].flicker_corner_hz\" = [\"10 kHz\", \"200 kHz\"]\n";
+        var path = Path.Combine(RepoPaths.TempDir(), "skipper_robust.toml");
+        File.WriteAllText(path, text);
+        var json = CliRunner.Run("design", path, "--json");
+        Assert.True(json.ExitCode == 0, json.Error);
+        using var doc = JsonDocument.Parse(json.Output);
+        var schemes = doc.RootElement.GetProperty("schemes").EnumerateArray().ToList();
+        var optimal = schemes.Single(s => s.GetProperty("scheme").GetString() == "optimal").GetProperty("noise_e_rms").GetDouble();
+        var robust = schemes.Single(s => s.GetProperty("scheme").GetString() == "robust").GetProperty("noise_e_rms").GetDouble();
+        Assert.NotEqual(Human.Num(optimal), Human.Num(robust)); // else the test could not tell them apart
+
+        var r = CliRunner.Run("design", path);
+        Assert.True(r.ExitCode == 0, r.Error);
+        Assert.Contains($"of the full optimum ({Human.Num(optimal)} e-)", r.Output, StringComparison.Ordinal);
     }
 
     [Fact]
