@@ -65,6 +65,18 @@ public class TwoStageCommandTests
         Assert.Contains($"of the full optimum ({Human.Num(optimal)} e-)", r.Output, StringComparison.Ordinal);
     }
 
+    /// <summary>The shipped example has [[emit]] entries: the report lists them from the two-stage proof (no full datapath to ask).</summary>
+    [Fact]
+    public void Report_of_the_shipped_two_stage_example_lists_its_emitted_files()
+    {
+        var outDir = Path.Combine(RepoPaths.TempDir(), "report");
+        var r = CliRunner.Run("report", RepoPaths.Example(Path.Combine("cycles", "skipper_two_stage.toml")), "--out", outDir);
+        Assert.True(r.ExitCode == 0, r.Error);
+        var md = File.ReadAllText(Path.Combine(outDir, "report.md"));
+        Assert.Contains("skipper_ts_two_stage.h", md, StringComparison.Ordinal);
+        Assert.Contains("skipper_ts_two_stage_pkg.vhd", md, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void Diff_of_a_two_stage_file_is_a_located_error()
     {

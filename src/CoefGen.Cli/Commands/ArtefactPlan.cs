@@ -82,13 +82,16 @@ internal static class ArtefactPlan
         return list;
     }
 
+    /// <summary>The built-in templates that can render this design (a two-stage design has its own).</summary>
+    private static IReadOnlyList<BuiltinTemplate> FormTemplates(DesignResult r) => r.IsTwoStage ? BuiltinTemplates.TwoStage : BuiltinTemplates.All;
+
     /// <summary>Renders everything in memory; on failure prints the diagnostics and returns null.</summary>
     public static IReadOnlyList<RenderedArtefact>? Render(DesignResult r, IReadOnlyList<(string Template, string OutputPath)> entries, TextWriter error)
     {
         if (entries.Count == 0)
         {
             DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG3101", SourceLocation.FileOnly(r.Description.SourcePath),
-                "nothing to emit: add [[emit]] entries (template, path) to the readout file or pass --format c-header|vhdl-package|sv-package|verilog-include")]);
+                $"nothing to emit: add [[emit]] entries (template, path) to the readout file or pass --format {string.Join('|', FormTemplates(r).Select(t => t.Name))}")]);
             return null;
         }
 
@@ -96,7 +99,7 @@ internal static class ArtefactPlan
         {
             if (!BuiltinTemplates.TryGet(template, out _) && !Path.IsPathRooted(template) && !template.Contains('.', StringComparison.Ordinal))
             {
-                var known = string.Join(", ", (r.IsTwoStage ? BuiltinTemplates.TwoStage : BuiltinTemplates.All).Select(t => t.Name));
+                var known = string.Join(", ", FormTemplates(r).Select(t => t.Name));
                 DiagnosticPrinter.PrintFailure(error, [Diagnostic.Error("CG3102", r.Description.LocationOf("emit"),
                     $"'{template}' is neither a built-in template ({known}) nor a template file path")]);
                 return null;
@@ -105,7 +108,7 @@ internal static class ArtefactPlan
             // A built-in template is written for one datapath: the full table's fields are not in the two-stage model and back.
             if (BuiltinTemplates.TryGet(template, out _) && BuiltinTemplates.IsTwoStage(template) != r.IsTwoStage)
             {
-                var fit = string.Join(", ", (r.IsTwoStage ? BuiltinTemplates.TwoStage : BuiltinTemplates.All).Select(t => t.Name));
+                var fit = string.Join(", ", FormTemplates(r).Select(t => t.Name));
                 var why = r.IsTwoStage
                     ? $"'{template}' writes a full coefficient table, but this file sets form = \"two-stage\" (the full table is not quantised)"
                     : $"'{template}' writes the two-stage tables, which need form = \"two-stage\" in [weights]";

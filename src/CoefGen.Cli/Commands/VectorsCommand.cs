@@ -95,7 +95,7 @@ internal static class VectorsCommand
 
                     if (twoStage is not null)
                     {
-                        TwoStageVectorFileWriter.Write(twoStage, Open, ToolInfo.Name, ToolInfo.Version, alongside: files);
+                        TwoStageVectorFileWriter.Write(twoStage, Open, ToolInfo.Name, ToolInfo.Version, progress, alongside: files);
                     }
                     else
                     {

@@ -87,7 +87,7 @@ internal static class CycleText
         var perElectron = r.Description.Sensor.VoltsAtAdcPerElectron;
         var sigma = Math.Sqrt(two.VarianceV2) / perElectron;
         // By scheme, not position: a file with [scenarios] puts the robust scheme last.
-        var optimal = r.Predictions[r.Weights.ToList().FindIndex(w => w.Scheme == CoefGen.Core.Readout.WeightScheme.Optimal)].SigmaElectrons;
+        var optimal = r.Predictions.First(p => p.Scheme == CoefGen.Core.Readout.WeightScheme.Optimal).SigmaElectrons;
         var average = r.Predictions[0].SigmaElectrons;
         sb.Append($"Two-stage form (one table of {two.PerReadTable.Length} weights per read x {two.ReadWeights.Length} read weights, designed jointly in {two.Iterations} alternating steps)\n");
         sb.Append($"  {Eng.Num(sigma)} e- rms: x{Eng.Num(sigma / optimal, 6)} of the full optimum ({Eng.Num(optimal)} e-), x{Eng.Num(sigma / average, 6)} of the plain average ({Eng.Num(average)} e-); {Role(r)}\n");

@@ -19,13 +19,6 @@ internal static class DesignJson
     /// <summary>Pending bytes above which <see cref="Numbers"/> hands them to the stream.</summary>
     private const int FlushBytes = 1 << 16;
 
-    public static string Render(DesignResult r)
-    {
-        using var text = new StringWriter(CultureInfo.InvariantCulture);
-        Write(text, r);
-        return text.ToString();
-    }
-
     /// <summary>Streams the document onto <paramref name="output"/> (the weight arrays are flushed as they are written).</summary>
     public static void Write(TextWriter output, DesignResult r)
     {

@@ -45,6 +45,14 @@ public static class CovarianceMixture
             digital += lambda[s] * scenarios[s].DigitalVarianceV2;
         }
 
-        return new SampledCovariance(first.SampleIndex, [new CovarianceComponent("scenario mixture", lags)], total > 0 ? digital : first.DigitalVarianceV2);
+        // A shot term (non-stationary, outside the lag tables) is the same in every scenario: with sum lambda = 1 the
+        // mixture's share of it is the term itself.
+        if (scenarios.Any(c => !ReferenceEquals(c.Shot, first.Shot)))
+        {
+            throw new ArgumentException("scenario covariances must share one shot-noise term");
+        }
+
+        return new SampledCovariance(first.SampleIndex, [new CovarianceComponent("scenario mixture", lags)], total > 0 ? digital : first.DigitalVarianceV2)
+            .WithShot(first.Shot);
     }
 }

@@ -12,12 +12,15 @@ public static class CycleNoise
         ArgumentNullException.ThrowIfNull(covariance);
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(d);
-        var shot = d.Timing.Cycle.ShotNoise;
-        if (shot is null || !(shot.TotalEPerS > 0))
-        {
-            return covariance;
-        }
+        return ShotOf(grid, d) is { } shot ? covariance.WithShot(shot) : covariance;
+    }
 
-        return covariance.WithShot(ShotNoiseCovariance.For(grid, d.Sensor, shot.TotalEPerS));
+    /// <summary>The shot-noise term of the cycle's integrating charge, or null without one.</summary>
+    public static ShotNoiseCovariance? ShotOf(SampleGrid grid, ReadoutDescription d)
+    {
+        ArgumentNullException.ThrowIfNull(grid);
+        ArgumentNullException.ThrowIfNull(d);
+        var shot = d.Timing.Cycle.ShotNoise;
+        return shot is null || !(shot.TotalEPerS > 0) ? null : ShotNoiseCovariance.For(grid, d.Sensor, shot.TotalEPerS);
     }
 }

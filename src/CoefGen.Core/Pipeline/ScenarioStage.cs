@@ -19,8 +19,11 @@ public static class ScenarioStage
         ArgumentNullException.ThrowIfNull(grid);
         ArgumentNullException.ThrowIfNull(weights);
         var spec = d.Scenarios ?? throw new ArgumentException("the description has no scenarios", nameof(d));
+        // The shot noise of an integrating charge does not depend on the noise keys a scenario varies: every
+        // scenario carries the nominal design's term (CycleNoise), so the robust weights see it too.
+        var shot = CycleNoise.ShotOf(grid, d);
         var covariances = spec.Cases
-            .Select(c => NoiseModel.FromDescription(d with { Noise = NoiseOverrides.Apply(d.Noise, c.Overrides) }).Sample(grid))
+            .Select(c => NoiseModel.FromDescription(d with { Noise = NoiseOverrides.Apply(d.Noise, c.Overrides) }).Sample(grid).WithShot(shot))
             .ToArray();
         RobustSolution solution;
         try

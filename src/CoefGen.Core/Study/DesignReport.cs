@@ -344,7 +344,7 @@ public static class DesignReport
             return new ReportSection("Emitted files", [new ReportBlock { Paragraph = "The readout file has no [[emit]] entries." }]);
         }
 
-        if (!r.Datapath.Proof.Safe)
+        if (!r.Proof.Safe)
         {
             return new ReportSection("Emitted files", [new ReportBlock
             {

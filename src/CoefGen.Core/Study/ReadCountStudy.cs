@@ -13,13 +13,17 @@ namespace CoefGen.Core.Study;
 /// </summary>
 public static class ReadCountStudy
 {
-    /// <summary>The curve, or null when the cycle has no read count (a classic file, a cycle without repetition).</summary>
+    /// <summary>
+    /// The curve, or null when the cycle has no read count (a classic file, a cycle without repetition) or the design
+    /// is on a capture: the capture's noise exists at its own read count only, and the other rows would come from the
+    /// parametric model (<see cref="DesignPoint"/> applies no capture), so the table would mix two noise models.
+    /// </summary>
     public static ReadCountCurve? Run(string baseText, DesignResult file, DesignPoint point)
     {
         ArgumentNullException.ThrowIfNull(baseText);
         ArgumentNullException.ThrowIfNull(file);
         ArgumentNullException.ThrowIfNull(point);
-        var axis = ReadCountAxis.Of(baseText, file.Description, out _);
+        var axis = file.CaptureSource is null ? ReadCountAxis.Of(baseText, file.Description, out _) : null;
         if (axis is null)
         {
             return null;

@@ -71,8 +71,8 @@ internal static class BranchPixels
         var result = BitExactModel.Run(design, codes);
         return branch switch
         {
-            AccHighInside or AccLowInside => result.Accumulator == acc && !result.AccumulatorClipped && !DatapathBranch.Of(design, codes).Contains(DatapathBranch.AccumulatorWrapped),
-            _ => DatapathBranch.Of(design, codes).Contains(branch),
+            AccHighInside or AccLowInside => result.Accumulator == acc && !result.AccumulatorClipped && !DatapathBranch.Of(design, codes, result).Contains(DatapathBranch.AccumulatorWrapped),
+            _ => DatapathBranch.Of(design, codes, result).Contains(branch),
         };
     }
 

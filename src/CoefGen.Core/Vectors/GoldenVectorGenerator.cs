@@ -77,7 +77,7 @@ public static class GoldenVectorGenerator
             UnreachedBranches = unreached,
             SamplerNote = sampler.Note,
         };
-        return new GoldenVectorSource(info, options.Pixels, Pixels(design, shape, sampler, result.Covariance.Shot, edges, fullCharge, options));
+        return new GoldenVectorSource(info, Pixels(design, shape, sampler, result.Covariance.Shot, edges, fullCharge, options));
     }
 
     private static IEnumerable<GoldenPixel> Pixels(

@@ -15,5 +15,5 @@ public sealed record GoldenVectorSet : GoldenVectorInfo
     public required IReadOnlyList<GoldenPixel> Pixels { get; init; }
 
     /// <summary>The same vectors as a stream (for the writer).</summary>
-    public GoldenVectorSource AsStream() => new(this, Pixels.Count, Pixels);
+    public GoldenVectorSource AsStream() => new(this, Pixels);
 }

@@ -9,15 +9,11 @@ namespace CoefGen.Core.Vectors;
 public sealed record GoldenVectorSource : GoldenVectorInfo
 {
     [SetsRequiredMembers]
-    public GoldenVectorSource(GoldenVectorInfo info, int pixelCount, IEnumerable<GoldenPixel> pixels)
+    public GoldenVectorSource(GoldenVectorInfo info, IEnumerable<GoldenPixel> pixels)
         : base(info)
     {
-        PixelCount = pixelCount;
         Pixels = pixels;
     }
-
-    /// <summary>How many pixels <see cref="Pixels"/> yields.</summary>
-    public required int PixelCount { get; init; }
 
     public required IEnumerable<GoldenPixel> Pixels { get; init; }
 }

@@ -27,6 +27,25 @@ public class RobustExampleTests
         Assert.Equal(WeightScheme.Robust, r.Chosen.Scheme);
     }
 
+    /// <summary>
+    /// One scenario on a ramp with photon and dark shot noise: the minimax is the plain optimum (definition) of the
+    /// covariance the design uses, shot term included; without it the robust weights would be the read-noise optimum.
+    /// </summary>
+    [Fact]
+    public void Robust_weights_of_a_ramp_see_its_shot_noise()
+    {
+        var name = Path.Combine("cycles", "up_the_ramp.toml");
+        var text = File.ReadAllText(ExampleDesigns.ExamplePath(name));
+        var optimal = ExampleDesigns.Load(name);
+        Assert.NotNull(optimal.Covariance.Shot);
+        Assert.DoesNotContain("[weights]", text, StringComparison.Ordinal); // the example takes the default scheme (optimal)
+        var robust = ExampleDesigns.FromText(text + "\n[weights]\nscheme = \"robust\"\n\n[scenarios]\n", "ramp_nominal_only.toml");
+        var h = robust.Chosen.H;
+        var reference = optimal.Weights.Single(w => w.Scheme == WeightScheme.Optimal).H;
+        Assert.Equal(WeightScheme.Robust, robust.Chosen.Scheme);
+        Assert.True(h.Zip(reference, (a, b) => Math.Abs(a - b)).Max() <= 1e-9 * reference.Max(Math.Abs));
+    }
+
     [Fact]
     public void With_the_nominal_noise_as_the_only_scenario_the_robust_design_is_the_optimal_design()
     {

@@ -21,6 +21,15 @@ public class ReadCountStudyTests
 
     private static double Noise(ReadCountPoint p, WeightScheme s) => p.Schemes.First(x => x.Scheme == s).NoiseElectrons;
 
+    /// <summary>Rows other than the file's would come from the parametric model; a capture design gets no mixed table.</summary>
+    [Fact]
+    public void A_design_on_a_capture_has_no_read_count_curve()
+    {
+        var (_, file) = Study(CycleFiles.RepeatedReads);
+        var onCapture = file with { CaptureSource = "idle.i16" };
+        Assert.Null(ReadCountStudy.Run(CycleFiles.RepeatedReads, onCapture, new DesignPoint("cyc.toml", _ => null, Pipeline.ShippedExamples.Catalog)));
+    }
+
     [Fact]
     public void Independent_reads_under_white_noise_follow_sigma_one_over_root_n_at_every_point()
     {

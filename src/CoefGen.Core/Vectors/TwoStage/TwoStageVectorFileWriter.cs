@@ -18,7 +18,8 @@ public static class TwoStageVectorFileWriter
     /// <summary>The data files in the order they are written (the manifest follows them).</summary>
     public static IReadOnlyList<string> DataFiles { get; } = [.. VectorFileWriter.DataFiles, ReadSums];
 
-    public static void Write(TwoStageVectorSource vectors, Func<string, Stream> open, string toolName, string toolVersion, IReadOnlyList<(string Name, byte[] Bytes)>? alongside = null)
+    public static void Write(TwoStageVectorSource vectors, Func<string, Stream> open, string toolName, string toolVersion, IProgress<int>? progress = null,
+        IReadOnlyList<(string Name, byte[] Bytes)>? alongside = null)
     {
         ArgumentNullException.ThrowIfNull(vectors);
         ArgumentNullException.ThrowIfNull(open);
@@ -44,8 +45,13 @@ public static class TwoStageVectorFileWriter
                 }
 
                 i++;
+                if (progress is not null && i % VectorFileWriter.ProgressStride == 0)
+                {
+                    progress.Report(i);
+                }
             }
 
+            progress?.Report(i);
             foreach (var w in outs)
             {
                 w.Finish();

@@ -44,7 +44,6 @@ public static class TwoStageVectorGenerator
             BaselineAdu = baseline,
             FullScaleChargeAdu = fullCharge,
             AduPerElectron = d.Sensor.VoltsAtAdcPerElectron / adc.LsbV,
-            PixelCount = options.Pixels,
             SamplerNote = sampler.Note,
             Pixels = Pixels(result, shape, sampler, edges, fullCharge, options),
         };

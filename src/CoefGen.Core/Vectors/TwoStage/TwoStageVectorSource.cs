@@ -29,8 +29,6 @@ public sealed record TwoStageVectorSource
 
     public required double AduPerElectron { get; init; }
 
-    public required int PixelCount { get; init; }
-
     /// <summary>What the noise sampler had to do that changes the drawn covariance, or null.</summary>
     public string? SamplerNote { get; init; }
 

@@ -41,14 +41,16 @@ public static class TwoStageWeights
 
         var a = Enumerable.Repeat(1.0 / n, n).ToArray();
         double[] g = [];
+        double[] h = [];
+        var v = double.NaN; // h and v of the last step are the result's (no second expansion and quadratic form)
         var variance = double.PositiveInfinity;
         var iterations = 0;
         for (; iterations < MaxIterations; iterations++)
         {
             g = SolveTable(blocks, step, a, layout.ResetClasses, m);
             a = SolveReadWeights(blocks, step, g, n);
-            var h = Expand(a, g);
-            var v = r.QuadraticForm(h);
+            h = Expand(a, g);
+            v = r.QuadraticForm(h);
             var done = variance - v <= Tolerance * v;
             variance = Math.Min(variance, v);
             if (done)
@@ -57,7 +59,7 @@ public static class TwoStageWeights
             }
         }
 
-        return new TwoStageResult(g, a, Expand(a, g), r.QuadraticForm(Expand(a, g)), iterations + 1);
+        return new TwoStageResult(g, a, h, v, iterations + 1);
     }
 
     /// <summary>h = a (x) g in grid order.</summary>
